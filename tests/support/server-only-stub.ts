@@ -1,0 +1,2 @@
+// Vitest runs server modules outside Next; the real "server-only" throws outside a server component graph.
+export {};
