@@ -1,0 +1,117 @@
+import type { CheckContext, CheckRequest, Justification } from "@/cas/check/protocol";
+import type { Derivation, DerivationBlock, DerivationStep } from "./derivation";
+
+/** Either a request to send to the checker, or why the step is not checked. */
+export type StepCheckPlan = { readonly request: CheckRequest } | { readonly notChecked: string };
+
+const LIMIT_ARROW = /\s*(?:\\to|\\rightarrow|->|→)\s*/;
+
+function stripLead(detail: string, word: string): string {
+  return detail.trim().replace(new RegExp(`^${word}\\s+`, "i"), "").trim();
+}
+
+/**
+ * Turns a step's justification (kind + free-text detail) into the checker's shape.
+ * Substitutions are the cited steps' relations followed by the relations written in the
+ * detail, separated by ";". Returns a message instead when the detail is missing.
+ *
+ * @example
+ * toProtocolJustification("limit", "c \\to \\infty", [], "\\tau") // { kind: "limit", symbol: "c", to: "\\infty" }
+ * toProtocolJustification("euler-lagrange", "in r", [], "\\tau")  // { kind: "euler-lagrange", coordinate: "r", parameter: "\\tau" }
+ */
+export function toProtocolJustification(
+  kind: DerivationStep["kind"],
+  detail: string,
+  citedRelations: readonly string[],
+  parameter: string,
+): Justification | { readonly problem: string } {
+  switch (kind) {
+    case "algebra":
+      return { kind };
+    case "definition":
+      return { kind };
+    case "substitute": {
+      const written = detail.split(/;|\n/).map((r) => r.trim()).filter(Boolean);
+      const relations = [...citedRelations, ...written];
+      return relations.length ? { kind, relations } : { problem: "Say what is substituted: cite a step or write the relation." };
+    }
+    case "differentiate": {
+      const by = stripLead(detail, "by");
+      return by ? { kind, by } : { problem: "Say which variable is differentiated by." };
+    }
+    case "euler-lagrange": {
+      const coordinate = stripLead(detail, "in");
+      return coordinate ? { kind, coordinate, parameter } : { problem: "Say which coordinate the Euler–Lagrange equation is in." };
+    }
+    case "limit": {
+      const [symbol, to] = detail.replace(/∞/g, "\\infty").split(LIMIT_ARROW).map((part) => part?.trim());
+      return symbol && to ? { kind, symbol, to } : { problem: "Write the limit as 'c \\to \\infty'." };
+    }
+  }
+}
+
+/**
+ * The checker context of a spacetime block plus the definitions made above a step:
+ * coordinates and constants become `symbols` (with their dimensions), assumptions pass
+ * through, and steps justified as "definition" become `definitions`.
+ *
+ * @example
+ * blockContext(block, ["E = \\mu c^2 \\dot t"]).symbols // { t: "time", r: "length", … }
+ */
+export function blockContext(block: DerivationBlock | null, definitions: readonly string[]): CheckContext {
+  if (!block) return { symbols: {}, definitions: [...definitions], assumptions: [] };
+  const symbols: Record<string, string | null> = {};
+  for (const s of [...block.coordinates, ...block.constants]) symbols[s.symbol] = s.dimension.trim() || null;
+  return { symbols, definitions: [...definitions], assumptions: [...block.assumptions], parameter: block.parameter };
+}
+
+/**
+ * Plans the check of one step: `from` is the first cited step's relation (or, for a
+ * substitution, and when nothing is cited, the previous step's), `to` is the step's own
+ * relation, the context is the nearest spacetime block above plus the definitions made
+ * before it under that block.
+ *
+ * @example
+ * planStepCheck(extractDerivation(doc), "st-b") // { request: { context, from, to, justification } }
+ */
+export function planStepCheck(derivation: Derivation, stepId: string): StepCheckPlan {
+  const index = derivation.steps.findIndex((s) => s.id === stepId);
+  if (index < 0) return { notChecked: "This step is not in the notebook." };
+  const step = derivation.steps[index];
+  if (!step.relation) return { notChecked: "The step is empty." };
+
+  const byId = new Map(derivation.steps.map((s) => [s.id, s]));
+  const block = step.blockIndex === null ? null : derivation.blocks[step.blockIndex];
+  const definitions = derivation.steps
+    .slice(0, index)
+    .filter((s) => s.kind === "definition" && s.blockIndex === step.blockIndex && s.relation)
+    .map((s) => s.relation);
+  const cited = step.cites.map((id) => byId.get(id)).filter((s): s is DerivationStep => s !== undefined);
+  const previous = step.previousId ? byId.get(step.previousId) : undefined;
+
+  const justification = toProtocolJustification(step.kind, step.detail, cited.map((s) => s.relation), block?.parameter ?? "\\tau");
+  if ("problem" in justification) return { notChecked: justification.problem };
+
+  const source = step.kind === "substitute" ? previous : (cited[0] ?? previous);
+  if (!source && step.kind !== "definition") {
+    return { notChecked: "First step under its spacetime block: nothing precedes it. Cite a step to check it against." };
+  }
+  return {
+    request: {
+      context: blockContext(block, definitions),
+      from: source?.relation ?? step.relation,
+      to: step.relation,
+      justification,
+    },
+  };
+}
+
+/**
+ * Plans every step of a derivation, keyed by step id, in document order.
+ *
+ * @example
+ * scheduler.schedule(() => planAllChecks(extractDerivation(editor.getJSON())));
+ */
+export function planAllChecks(derivation: Derivation): Map<string, StepCheckPlan> {
+  return new Map(derivation.steps.map((step) => [step.id, planStepCheck(derivation, step.id)]));
+}

@@ -1,0 +1,94 @@
+import { Extension } from "@tiptap/core";
+import type { Node as PMNode } from "@tiptap/pm/model";
+import { Plugin, PluginKey } from "@tiptap/pm/state";
+import { Decoration, DecorationSet } from "@tiptap/pm/view";
+
+export interface StepNumberingState {
+  /** Step id → its current number (1-based, document order). */
+  readonly numbers: ReadonlyMap<string, number>;
+  readonly decorations: DecorationSet;
+}
+
+export const stepNumberingKey = new PluginKey<StepNumberingState>("stepNumbering");
+
+/**
+ * Numbers the steps of a document in order, 1-based. Steps without an id are counted but
+ * cannot be looked up.
+ *
+ * @example
+ * numberSteps(doc).get("st-a") // 3 when st-a is the third step
+ */
+export function numberSteps(doc: PMNode): Map<string, number> {
+  const numbers = new Map<string, number>();
+  let count = 0;
+  doc.descendants((node) => {
+    if (node.type.name === "step") {
+      count += 1;
+      if (node.attrs.id && !numbers.has(node.attrs.id)) numbers.set(node.attrs.id, count);
+      return false;
+    }
+    return node.isBlock;
+  });
+  return numbers;
+}
+
+function buildDecorations(doc: PMNode, numbers: ReadonlyMap<string, number>): DecorationSet {
+  const decorations: Decoration[] = [];
+  doc.descendants((node, pos) => {
+    if (node.type.name === "step") {
+      const stepNumber = numbers.get(node.attrs.id) ?? null;
+      decorations.push(Decoration.node(pos, pos + node.nodeSize, { "data-step-number": String(stepNumber ?? "") }, { stepNumber }));
+      return false;
+    }
+    if (node.type.name === "stepRef") {
+      const stepNumber = numbers.get(node.attrs.stepId) ?? null;
+      decorations.push(Decoration.node(pos, pos + node.nodeSize, {}, { stepNumber }));
+    }
+    return true;
+  });
+  return DecorationSet.create(doc, decorations);
+}
+
+/**
+ * Step numbers are computed, never stored: this plugin derives them from document order
+ * after every change and hands each step and each citation (`stepRef`) its current number
+ * through a node decoration whose spec is `{ stepNumber }`. Node views read it from their
+ * decorations, so a citation shows the cited step's new number as soon as steps move.
+ *
+ * @example
+ * stepNumberingKey.getState(editor.state)?.numbers.get(id)
+ */
+export const StepNumbering = Extension.create({
+  name: "stepNumbering",
+
+  addProseMirrorPlugins() {
+    return [
+      new Plugin<StepNumberingState>({
+        key: stepNumberingKey,
+        state: {
+          init: (_config, state) => {
+            const numbers = numberSteps(state.doc);
+            return { numbers, decorations: buildDecorations(state.doc, numbers) };
+          },
+          apply: (tr, old) => {
+            if (!tr.docChanged) return old;
+            const numbers = numberSteps(tr.doc);
+            return { numbers, decorations: buildDecorations(tr.doc, numbers) };
+          },
+        },
+        props: {
+          decorations: (state) => stepNumberingKey.getState(state)?.decorations,
+        },
+      }),
+    ];
+  },
+});
+
+/** Reads the decoration spec's step number inside a node view (null when the step is gone). */
+export function stepNumberFromDecorations(decorations: readonly { spec: unknown }[]): number | null {
+  for (const decoration of decorations) {
+    const spec = decoration.spec as { stepNumber?: number | null } | undefined;
+    if (spec && "stepNumber" in spec) return spec.stepNumber ?? null;
+  }
+  return null;
+}
