@@ -1,0 +1,64 @@
+import "server-only";
+import { RateLimiterMemory, RateLimiterRes } from "rate-limiter-flexible";
+import { AppError } from "./errors";
+
+// Per process, in memory: enough for one server. Kept on globalThis so dev reloads keep counts.
+type Limiters = { signInByIp: RateLimiterMemory; signInByAccount: RateLimiterMemory; mailByIp: RateLimiterMemory };
+const key = Symbol.for("vierbein.rate-limiters");
+const store = globalThis as unknown as Record<symbol, Limiters | undefined>;
+
+function limiters(): Limiters {
+  return (store[key] ??= {
+    // Any sign-in attempt from one address: 30 per 15 minutes.
+    signInByIp: new RateLimiterMemory({ keyPrefix: "sign-in-ip", points: 30, duration: 15 * 60 }),
+    // Failed passwords for one account: 5, then 15 minutes' pause. Keyed by the typed
+    // address whether or not it exists, so the pause reveals nothing.
+    signInByAccount: new RateLimiterMemory({ keyPrefix: "sign-in-account", points: 5, duration: 15 * 60, blockDuration: 15 * 60 }),
+    // Mails we send on request (sign-up, password reset): 10 per hour per address.
+    mailByIp: new RateLimiterMemory({ keyPrefix: "mail-ip", points: 10, duration: 60 * 60 }),
+  });
+}
+
+const pauseMessage = "Too many sign-in attempts. Wait a few minutes and try again.";
+
+function isRejection(error: unknown): error is RateLimiterRes {
+  return error instanceof RateLimiterRes;
+}
+
+/** Counts a sign-in attempt; throws rate_limited when the address or the account is paused. */
+export async function checkSignInAllowed({ ip, email }: { ip: string; email: string }): Promise<void> {
+  const { signInByIp, signInByAccount } = limiters();
+  const account = await signInByAccount.get(email);
+  if (account && account.remainingPoints <= 0) throw new AppError("rate_limited:sign-in", pauseMessage);
+  try {
+    await signInByIp.consume(ip);
+  } catch (error) {
+    if (isRejection(error)) throw new AppError("rate_limited:sign-in", pauseMessage);
+    throw error;
+  }
+}
+
+export async function recordSignInFailure({ email }: { email: string }): Promise<void> {
+  await limiters().signInByAccount.consume(email).catch((error: unknown) => {
+    if (!isRejection(error)) throw error;
+  });
+}
+
+export async function recordSignInSuccess({ email }: { email: string }): Promise<void> {
+  await limiters().signInByAccount.delete(email);
+}
+
+/** Limits requests that make us send mail (sign-up, reset) so the app cannot be used to flood an inbox. */
+export async function checkMailRequestAllowed({ ip }: { ip: string }): Promise<void> {
+  try {
+    await limiters().mailByIp.consume(ip);
+  } catch (error) {
+    if (isRejection(error)) throw new AppError("rate_limited:mail", "Too many requests from your network. Try again later.");
+    throw error;
+  }
+}
+
+/** Forgets every count (tests). */
+export function resetRateLimits(): void {
+  store[key] = undefined;
+}
