@@ -1,0 +1,63 @@
+import { expect, test } from "@playwright/test";
+import { DashboardPage } from "./pages/dashboard-page";
+import { NotebookPage } from "./pages/notebook-page";
+import { SignInPage } from "./pages/sign-in-page";
+import { demoAccounts, demoPassword } from "./support/demo-accounts";
+
+async function signInAs(page: import("@playwright/test").Page, email: string) {
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.signIn(email, demoPassword);
+  await new DashboardPage(page).expectLoaded();
+}
+
+test("an author creates a notebook and finds it in the table", async ({ page }) => {
+  await signInAs(page, demoAccounts.author);
+  const dashboard = new DashboardPage(page);
+  const title = `Test-particle orbits ${Date.now().toString(36)}`;
+  await dashboard.createNotebook(title);
+  await new NotebookPage(page).expectTitle(title);
+
+  await dashboard.open();
+  await dashboard.filter(title);
+  const table = dashboard.notebooksTable();
+  await expect(table.getByRole("link", { name: title })).toBeVisible();
+  await expect(table.getByRole("row")).toHaveCount(2); // header + the one match
+});
+
+test("the notebooks table sorts by title on request", async ({ page }) => {
+  await signInAs(page, demoAccounts.lead);
+  const table = new DashboardPage(page).notebooksTable();
+  await expect(table.getByRole("row").nth(1)).toBeVisible();
+  await table.getByRole("button", { name: /^Title/ }).click();
+  await expect(table.getByRole("columnheader", { name: /^Title/ })).toHaveAttribute("aria-sort", "ascending");
+  const titles = await table.getByRole("row").locator("td:first-child").allInnerTexts();
+  const sorted = [...titles].sort((a, b) => a.localeCompare(b, "en", { sensitivity: "base" }));
+  expect(titles).toEqual(sorted);
+});
+
+test("a reader sees no way to create a notebook and the API refuses one", async ({ page }) => {
+  await signInAs(page, demoAccounts.reader);
+  const dashboard = new DashboardPage(page);
+  await expect(dashboard.groupsPanel().getByRole("link").first()).toBeVisible();
+  await expect(dashboard.newNotebookButton).toHaveCount(0);
+
+  // The browser's session cookie rides along with page.request.
+  const groups = (await (await page.request.get("/api/groups")).json()) as { groups: { id: string; role: string }[] };
+  const readerGroup = groups.groups.find((group) => group.role === "reader");
+  expect(readerGroup).toBeDefined();
+  const response = await page.request.post("/api/notebooks", { data: { groupId: readerGroup!.id, title: "Not allowed" } });
+  expect(response.status()).toBe(403);
+});
+
+test("a reader opens a demo notebook read-only", async ({ page }) => {
+  await signInAs(page, demoAccounts.reader);
+  const table = new DashboardPage(page).notebooksTable();
+  const firstLink = table.getByRole("link").first();
+  const title = (await firstLink.innerText()).trim();
+  await firstLink.click();
+  const notebook = new NotebookPage(page);
+  await notebook.expectTitle(title);
+  await expect(notebook.readOnlyBadge()).toBeVisible();
+  await expect(page.getByRole("button", { name: "Rename the notebook" })).toHaveCount(0);
+});
