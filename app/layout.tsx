@@ -11,6 +11,7 @@ export const metadata: Metadata = {
   title: { default: "Vierbein", template: "%s · Vierbein" },
   description:
     "A derivation notebook for relativity research groups: every step machine-checked, co-authored live, refereed and published as citable editions.",
+  icons: { icon: "/icon.svg" },
 };
 
 export const viewport: Viewport = { themeColor: "#fbf8f1" };
