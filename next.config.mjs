@@ -1,0 +1,10 @@
+/** @type {import('next').NextConfig} */
+const nextConfig = {
+  // PGlite ships wasm and data files it loads from its own folder; bundling it would copy
+  // them into the public static output. pg and nodemailer are plain Node packages.
+  serverExternalPackages: ["@electric-sql/pglite", "pg", "nodemailer", "bcryptjs"],
+  poweredByHeader: false,
+  reactStrictMode: true,
+};
+
+export default nextConfig;

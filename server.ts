@@ -1,0 +1,94 @@
+// Server side: the one process that serves Vierbein. Migrates the database, then serves
+// Next on PORT (and, later, the co-authoring websocket on /yjs/ on the same port).
+// Run: `node --import tsx server.ts` (dev) or with NODE_ENV=production after `next build`.
+import { createServer, type IncomingMessage } from "node:http";
+import { EventEmitter } from "node:events";
+import type { Duplex } from "node:stream";
+import next from "next";
+import { closeDb, dbKind, getDbHandle } from "./db/client";
+
+const dev = process.env.NODE_ENV !== "production";
+const port = Number(process.env.PORT || 3000);
+const hostname = process.env.HOST || "0.0.0.0";
+process.env.NEXTAUTH_URL ||= `http://localhost:${port}`;
+
+/** Paths whose websocket upgrades this server answers itself; nothing else may claim them. */
+export const YJS_PATH_PREFIX = "/yjs/";
+
+type UpgradeHandler = (req: IncomingMessage, socket: Duplex, head: Buffer) => void;
+
+async function main(): Promise<void> {
+  await getDbHandle(); // migrations run here, before the first request
+  console.info(`[server] database ready (${dbKind()})`);
+
+  // Next attaches its own upgrade listener to the server of the first request it sees.
+  // Handing it a stand-in emitter keeps the single upgrade listener below in charge.
+  const app = next({ dev, hostname, port, httpServer: new EventEmitter() as never });
+  await app.prepare();
+  const handle = app.getRequestHandler();
+  const nextUpgrade: UpgradeHandler = app.getUpgradeHandler();
+
+  // ---- Yjs websocket (co-authoring) -----------------------------------------------------
+  // The co-authoring work attaches its handler here; it must claim only YJS_PATH_PREFIX.
+  const yjsUpgrade = null as UpgradeHandler | null;
+  // ---------------------------------------------------------------------------------------
+
+  const trustProxy = process.env.TRUST_PROXY === "1";
+  const server = createServer((req, res) => {
+    // The rate limits key on the client address; without a trusted proxy in front, the
+    // header a client sends is replaced by the socket's own address.
+    if (!trustProxy) req.headers["x-forwarded-for"] = req.socket.remoteAddress ?? "unknown";
+    handle(req, res).catch((error: unknown) => {
+      console.error("[server] request failed", error);
+      if (!res.headersSent) res.statusCode = 500;
+      res.end();
+    });
+  });
+
+  server.on("upgrade", (req: IncomingMessage, socket: Duplex, head: Buffer) => {
+    const pathname = new URL(req.url ?? "/", "http://localhost").pathname;
+    if (pathname.startsWith(YJS_PATH_PREFIX)) {
+      if (yjsUpgrade) return yjsUpgrade(req, socket, head);
+      return socket.destroy();
+    }
+    // Dev: hot reload's socket. Production serves no other websockets.
+    if (dev) return nextUpgrade(req, socket, head);
+    socket.destroy();
+  });
+
+  server.listen(port, hostname, () => {
+    console.info(`[server] Vierbein ${dev ? "development" : "production"} on http://localhost:${port}`);
+  });
+
+  let closing = false;
+  const shutdown = (signal: string) => {
+    if (closing) return;
+    closing = true;
+    console.info(`[server] ${signal}: closing`);
+    // Idle keep-alive connections would hold close() open; in-flight requests still finish.
+    server.closeIdleConnections();
+    const forceExit = setTimeout(() => {
+      console.error("[server] connections did not close in time; exiting");
+      server.closeAllConnections();
+    }, 10_000);
+    forceExit.unref();
+    server.close(async () => {
+      try {
+        await app.close();
+        await closeDb();
+        console.info("[server] closed cleanly");
+        process.exit(0);
+      } catch (error) {
+        console.error("[server] error while closing", error);
+        process.exit(1);
+      }
+    });
+  };
+  process.on("SIGTERM", () => shutdown("SIGTERM"));
+  process.on("SIGINT", () => shutdown("SIGINT"));
+}
+
+main().catch((error: unknown) => {
+  console.error("[server] failed to start", error);
+  process.exit(1);
+});
