@@ -66,6 +66,10 @@ export interface CheckAnswer {
   readonly witness?: Readonly<Record<string, string>>;
   readonly reason?: string;
   readonly dimensions?: DimensionReport;
+  /** The two sides' values at the witness point (decimal strings), for a refuted step. */
+  readonly witnessSides?: { readonly left: string; readonly right: string };
+  /** Concrete smooth functions (plain syntax in x1, x2, …) that stood in for undetermined functions such as A(r). */
+  readonly substitutedFunctions?: Readonly<Record<string, string>>;
 }
 
 /** A request the engine refused to run (malformed, too large, timed out). */

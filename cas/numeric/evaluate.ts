@@ -131,12 +131,33 @@ export function decimalContext(digits: number): DecimalContext {
   return Decimal.clone({ precision: digits, rounding: Decimal.ROUND_HALF_EVEN, toExpNeg: -30, toExpPos: 30 });
 }
 
+// One field per precision context, with π and e computed once: acos(−1) at 50 digits costs more than a whole evaluation.
+const decimalFields = new WeakMap<DecimalContext, Field<Decimal>>();
+
 function decimalField(D: DecimalContext): Field<Decimal> {
+  const cached = decimalFields.get(D);
+  if (cached) return cached;
+  const field = makeDecimalField(D);
+  decimalFields.set(D, field);
+  return field;
+}
+
+function makeDecimalField(D: DecimalContext): Field<Decimal> {
   const one = new D(1);
+  let piValue: Decimal | undefined;
+  let eValue: Decimal | undefined;
+  const literals = new Map<string, Decimal>();
   return {
-    fromLiteral: (t) => new D(t),
-    pi: () => D.acos(-1),
-    e: () => D.exp(1),
+    fromLiteral: (t) => {
+      let v = literals.get(t);
+      if (!v) {
+        v = new D(t);
+        if (literals.size < 10_000) literals.set(t, v);
+      }
+      return v;
+    },
+    pi: () => (piValue ??= D.acos(-1)),
+    e: () => (eValue ??= D.exp(1)),
     add: (a, b) => a.plus(b),
     mul: (a, b) => a.times(b),
     div: (a, b) => {
