@@ -66,9 +66,10 @@ export function blockContext(block: DerivationBlock | null, definitions: readonl
 }
 
 /**
- * Plans the check of one step: `from` is the first cited step's relation (or, for a
- * substitution, and when nothing is cited, the previous step's), `to` is the step's own
- * relation, the context is the nearest spacetime block above plus the definitions made
+ * Plans the check of one step. `from` is the relation of the step it explicitly follows
+ * (`follows`); otherwise of the first cited step — except for a substitution, whose cited
+ * steps are what is substituted — and otherwise of the previous step. `to` is the step's
+ * own relation; the context is the nearest spacetime block above plus the definitions made
  * before it under that block.
  *
  * @example
@@ -92,7 +93,8 @@ export function planStepCheck(derivation: Derivation, stepId: string): StepCheck
   const justification = toProtocolJustification(step.kind, step.detail, cited.map((s) => s.relation), block?.parameter ?? "\\tau");
   if ("problem" in justification) return { notChecked: justification.problem };
 
-  const source = step.kind === "substitute" ? previous : (cited[0] ?? previous);
+  const follows = step.followsId ? byId.get(step.followsId) : undefined;
+  const source = follows ?? (step.kind === "substitute" ? previous : (cited[0] ?? previous));
   if (!source && step.kind !== "definition") {
     return { notChecked: "First step under its spacetime block: nothing precedes it. Cite a step to check it against." };
   }

@@ -23,6 +23,8 @@ export interface DerivationStep {
   readonly detail: string;
   /** Ids of the earlier steps it cites (unknown ids dropped, order kept). */
   readonly cites: readonly string[];
+  /** The earlier step it explicitly follows from (`follows`), or null. */
+  readonly followsId: string | null;
   /** The step before it under the same spacetime block, or null for the first one. */
   readonly previousId: string | null;
   /** Index into `blocks` of the nearest spacetime block above, or null when there is none. */
@@ -68,7 +70,8 @@ function toBlock(attrs: Record<string, unknown>): DerivationBlock {
  *
  * Rules: steps are numbered over the whole notebook; a step's context is the nearest
  * spacetime block above it; a step's `previousId` is the step before it under the same
- * block (a new block starts a new chain); citations of unknown or later steps are dropped.
+ * block (a new block starts a new chain); citations and `follows` of unknown or later steps
+ * are dropped.
  *
  * @example
  * const { steps } = extractDerivation(editor.getJSON());
@@ -96,6 +99,7 @@ export function extractDerivation(doc: JSONContent): Derivation {
       const id = typeof attrs.id === "string" && attrs.id ? attrs.id : null;
       const cites = Array.isArray(attrs.cites) ? attrs.cites.filter((c): c is string => typeof c === "string" && seen.has(c)) : [];
       if (id === null || seen.has(id)) return; // step-ids.ts repairs these in the editor
+      const followsId = typeof attrs.follows === "string" && seen.has(attrs.follows) ? attrs.follows : null;
       steps.push({
         id,
         number: steps.length + 1,
@@ -103,6 +107,7 @@ export function extractDerivation(doc: JSONContent): Derivation {
         kind: isJustificationKind(attrs.kind) ? attrs.kind : "algebra",
         detail: typeof attrs.detail === "string" ? attrs.detail : "",
         cites,
+        followsId,
         previousId,
         blockIndex: blocks.length ? blocks.length - 1 : null,
         section,

@@ -22,8 +22,10 @@ export interface StepAttributes {
   readonly kind: JustificationKind;
   /** The justification's argument in LaTeX/plain text (see JUSTIFICATION_DETAIL_HINT). */
   readonly detail: string;
-  /** Ids of earlier steps this step cites. */
+  /** Ids of earlier steps this step cites (for a substitution: the relations substituted). */
   readonly cites: readonly string[];
+  /** Id of the step this one follows from, when it is not simply the previous step. */
+  readonly follows: string | null;
 }
 
 export function isJustificationKind(value: unknown): value is JustificationKind {
@@ -34,7 +36,7 @@ declare module "@tiptap/core" {
   interface Commands<ReturnType> {
     step: {
       /** Inserts a step after the current top-level block and puts the caret in it. */
-      insertStep: (step?: { relation?: string; kind?: JustificationKind; detail?: string; cites?: string[] }) => ReturnType;
+      insertStep: (step?: { relation?: string; kind?: JustificationKind; detail?: string; cites?: string[]; follows?: string | null }) => ReturnType;
       /** Changes the justification or citations of the step with this id. */
       updateStep: (id: string, attrs: Partial<Omit<StepAttributes, "id">>) => ReturnType;
     };
@@ -47,10 +49,11 @@ declare module "@tiptap/core" {
  *
  * Contract
  * - Attributes: `id` (stable, see step-ids.ts), `kind` (one of JUSTIFICATION_KINDS), `detail`
- *   (the justification's argument), `cites` (ids of cited steps). The number is NOT stored:
- *   it is computed from document order (step-numbering.ts).
+ *   (the justification's argument), `cites` (ids of cited steps), `follows` (id of the step it
+ *   follows from when that is not the previous one). The number is NOT stored: it is computed
+ *   from document order (step-numbering.ts).
  * - Content is plain LaTeX text without marks, so co-authors merge character by character.
- * - HTML: `<div data-type="step" data-step-id data-justification data-detail data-cites="id id"><pre>…</pre></div>`.
+ * - HTML: `<div data-type="step" data-step-id data-justification data-detail data-cites="id id" data-follows><pre>…</pre></div>`.
  * - Keys: Enter at the end of a step opens the next step; Enter in an empty step turns it
  *   into a paragraph; Mod-Enter inserts a step below the current block from anywhere.
  *
@@ -91,6 +94,11 @@ export const Step = Node.create({
         parseHTML: (element) => (element.getAttribute("data-cites") ?? "").split(/\s+/).filter(Boolean),
         renderHTML: (attributes) => (attributes.cites?.length ? { "data-cites": attributes.cites.join(" ") } : {}),
       },
+      follows: {
+        default: null,
+        parseHTML: (element) => element.getAttribute("data-follows") || null,
+        renderHTML: (attributes) => (attributes.follows ? { "data-follows": attributes.follows } : {}),
+      },
     };
   },
 
@@ -114,7 +122,7 @@ export const Step = Node.create({
           const { $from } = state.selection;
           const after = $from.depth > 0 ? $from.after(1) : state.doc.content.size;
           const node = this.type.create(
-            { id: newStepId(), kind: step.kind ?? "algebra", detail: step.detail ?? "", cites: step.cites ?? [] },
+            { id: newStepId(), kind: step.kind ?? "algebra", detail: step.detail ?? "", cites: step.cites ?? [], follows: step.follows ?? null },
             step.relation ? state.schema.text(step.relation) : null,
           );
           if (dispatch) {

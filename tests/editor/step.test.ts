@@ -4,7 +4,7 @@ import { nodeFromJSON, parseOuter, renderOuter, schema } from "./support/html-sp
 
 const stepJSON = {
   type: "step",
-  attrs: { id: "st-a", kind: "euler-lagrange", detail: "r", cites: ["st-0", "st-1"] },
+  attrs: { id: "st-a", kind: "euler-lagrange", detail: "r", cites: ["st-0", "st-1"], follows: "st-0" },
   content: [{ type: "text", text: "\\frac{d}{d\\tau}\\left(\\frac{\\dot r}{1-r_s/r}\\right) = 0" }],
 };
 
@@ -24,7 +24,7 @@ describe("step node", () => {
 
   it("defaults to an algebra step without citations", () => {
     const node = nodeFromJSON({ type: "step" });
-    expect(node.attrs).toEqual({ id: null, kind: "algebra", detail: "", cites: [] });
+    expect(node.attrs).toEqual({ id: null, kind: "algebra", detail: "", cites: [], follows: null });
   });
 
   it("round-trips its attributes through HTML", () => {

@@ -16,7 +16,7 @@ export function headlessEditor(content: JSONContent): Editor {
 }
 
 export function step(id: string | null, relation: string, attrs: Record<string, unknown> = {}): JSONContent {
-  return { type: "step", attrs: { id, kind: "algebra", detail: "", cites: [], ...attrs }, content: relation ? [{ type: "text", text: relation }] : [] };
+  return { type: "step", attrs: { id, kind: "algebra", detail: "", cites: [], follows: null, ...attrs }, content: relation ? [{ type: "text", text: relation }] : [] };
 }
 
 export function paragraph(...content: JSONContent[]): JSONContent {
