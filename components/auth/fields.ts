@@ -5,4 +5,4 @@ export const emailField = z.string().trim().min(1, "Enter your e-mail address.")
 export const newPasswordField = z
   .string()
   .min(8, "Use at least 8 characters.")
-  .max(200, "Use at most 200 characters.");
+  .max(72, "Use at most 72 characters.");

@@ -12,7 +12,7 @@ import { emailField, newPasswordField } from "./fields";
 
 const signUpSchema = z
   .object({
-    name: z.string().trim().min(1, "Enter the name your co-authors will see.").max(120, "Use at most 120 characters."),
+    name: z.string().trim().min(1, "Enter the name your co-authors will see.").max(100, "Use at most 100 characters."),
     email: emailField,
     password: newPasswordField,
     confirm: z.string(),
