@@ -1,0 +1,847 @@
+import type { Expr, RelationOp, Statement } from "../expr/types";
+import { dotVariable } from "../expr/types";
+import { call, deriv, differential, div, dot, euler, infinity, limit, mul, neg, num, pi, pow, relation, sym, add } from "../expr/build";
+import { fail } from "./errors";
+import { guardLength, MAX_DEPTH, resolveOptions, type ReadOptions, type ResolvedOptions } from "./options";
+import { tokenizeLatex, type LatexToken } from "./latex-tokens";
+import { BARE_FUNCTION_WORDS, FUNCTION_COMMANDS, LETTER_COMMANDS, SUBSCRIPT_COMMANDS, WRAPPER_COMMANDS } from "./latex-vocabulary";
+
+/**
+ * Reads one relation or expression written the way a relativist writes LaTeX.
+ *
+ * Reading rules worth knowing:
+ * - Juxtaposition binds tighter than `/`, `\cdot`, `\times` (`GM/rc^2` is GM/(r c²),
+ *   the convention of physics journals); `/`, `\cdot`, `\times`, `*` are left-associative.
+ * - Declared names (options) beat letter-by-letter reading: with `GM` declared, `GM`
+ *   is one symbol; otherwise G·M. A letter with a subscript is always one symbol (`r_s`).
+ * - A declared function followed by `(` is a call; an undeclared letter before `(`
+ *   multiplies. `A'(r)` is the derivative of a declared function.
+ * - `e` is Euler's number unless declared as a symbol; `\pi` is π.
+ * - `d` followed by a coordinate is a differential when the coordinate is declared,
+ *   or anywhere in a line element (source starting `ds^2`, `d\tau^2`, `d\sigma^2`);
+ *   `\mathrm{d}x` is always a differential. `dt^2` is (dt)².
+ * - `\frac{dr}{d\tau}` is ṙ when τ is the curve parameter; other Leibniz forms give
+ *   derivative nodes; a derivative by a dotted symbol (`\partial \dot r`) is by `r_dot`.
+ * - `\sin^2\theta` is (sin θ)²; `\sin^{-1}` is arcsin. A bare function argument
+ *   runs over the following letters and numbers (`\sin 2\theta`, `\sin\omega t`) and
+ *   stops at a spacing command, an operator, a function, `\dot`, a fraction, a
+ *   parenthesis or the letter `d`.
+ * - One relation per statement: `a = b = c` is rejected. A trailing `,` or `.` is ignored.
+ *
+ * @example
+ * readLatex("ds^2 = -\\left(1-\\frac{r_s}{r}\\right)c^2dt^2 + \\frac{dr^2}{1-r_s/r} + r^2 d\\Omega^2")
+ */
+export function readLatex(source: string, options?: ReadOptions): Statement {
+  guardLength(source);
+  return new LatexReader(source, resolveOptions(options)).statement();
+}
+
+/**
+ * Like {@link readLatex} but rejects relations.
+ *
+ * @example
+ * readLatexExpr("\\frac{GM}{r^2}")   // div(mul(G, M), pow(r, 2))
+ */
+export function readLatexExpr(source: string, options?: ReadOptions): Expr {
+  const s = readLatex(source, options);
+  if (s.kind === "relation") fail("unexpected", "expected an expression, found a relation", 0);
+  return s;
+}
+
+const RELATION_COMMANDS: Readonly<Record<string, RelationOp>> = {
+  le: "<=", leq: "<=", leqslant: "<=", ge: ">=", geq: ">=", geqslant: ">=",
+  neq: "!=", ne: "!=", lt: "<", gt: ">", equiv: "=", coloneqq: "=", eqqcolon: "=",
+};
+const UNSUPPORTED_RELATIONS = new Set(["approx", "sim", "simeq", "propto", "ll", "gg", "cong", "to", "rightarrow", "Rightarrow", "implies", "iff", "mapsto"]);
+const PRODUCT_COMMANDS = new Set(["cdot", "times", "ast"]);
+const ATOM_COMMANDS_NOT_FACTOR_START = new Set([...PRODUCT_COMMANDS, ...Object.keys(RELATION_COMMANDS), ...UNSUPPORTED_RELATIONS, "pm", "mp", "div", "right"]);
+
+interface Range { readonly start: number; readonly end: number; readonly after: number }
+interface DerivOperator { readonly partial: boolean; readonly order: number; readonly next: number }
+
+class LatexReader {
+  private readonly tokens: readonly LatexToken[];
+  private readonly partner: ReadonlyMap<number, number>;
+  private i = 0;
+  /** Tokens at or after `bound` read as the end (used for arguments such as `\frac12`). */
+  private bound: number;
+  private depth = 0;
+  private absDepth = 0;
+  private readonly lineElement: boolean;
+
+  constructor(private readonly source: string, private readonly options: ResolvedOptions) {
+    const stream = tokenizeLatex(source);
+    this.tokens = stream.tokens;
+    this.partner = stream.partner;
+    this.bound = this.tokens.length - 1;
+    if (this.bound === 0) fail("empty", "the source is empty", 0);
+    this.lineElement = options.lineElement ?? this.startsLikeLineElement();
+  }
+
+  // ---- token access -------------------------------------------------------
+
+  private peek(offset = 0): LatexToken {
+    const k = this.i + offset;
+    return k < this.bound ? this.tokens[k] : this.endAt(this.bound);
+  }
+  private tokenAt(k: number): LatexToken {
+    return k < this.bound ? this.tokens[k] : this.endAt(this.bound);
+  }
+  private endAt(k: number): LatexToken {
+    const t = this.tokens[k];
+    return { kind: "end", text: "", pos: t.pos, end: t.pos, sized: false, ws: t.ws, thin: t.thin };
+  }
+  private next(): LatexToken {
+    const t = this.peek();
+    if (t.kind !== "end") this.i += 1;
+    return t;
+  }
+  private isChar(t: LatexToken, c: string): boolean { return t.kind === "char" && t.text === c; }
+  private isCmd(t: LatexToken, name: string): boolean { return t.kind === "cmd" && t.text === name; }
+  private text(t: LatexToken): string { return t.kind === "end" ? "the end" : `'${this.source.slice(t.pos, t.end)}'`; }
+
+  private enter(pos: number): void {
+    this.depth += 1;
+    if (this.depth > MAX_DEPTH) fail("too_deep", `nesting deeper than ${MAX_DEPTH} levels at ${pos}`, pos);
+  }
+  private leave(): void { this.depth -= 1; }
+
+  /** Runs `read` on the tokens of `range` only, then continues after it. */
+  private within<T>(range: Range, read: () => T): T {
+    const savedBound = this.bound;
+    this.i = range.start;
+    this.bound = range.end;
+    const out = read();
+    const rest = this.peek();
+    if (rest.kind !== "end") this.unexpected(rest);
+    this.bound = savedBound;
+    this.i = range.after;
+    return out;
+  }
+
+  // ---- statement ----------------------------------------------------------
+
+  statement(): Statement {
+    const lhs = this.expression();
+    let result: Statement = lhs;
+    const op = this.relationAhead();
+    if (op) {
+      const rhs = this.expression();
+      result = relation(lhs, op, rhs);
+      const again = this.peek();
+      if (this.relationAhead()) fail("chain", `a second relation at ${again.pos}: write one relation per step`, again.pos);
+    }
+    const tail = this.peek();
+    if (this.isChar(tail, ",") || this.isChar(tail, ".") || this.isChar(tail, ";")) this.next();
+    const end = this.peek();
+    if (end.kind !== "end") this.unexpected(end);
+    return result;
+  }
+
+  /** Consumes a relation sign and returns it, or returns undefined. */
+  private relationAhead(): RelationOp | undefined {
+    const t = this.peek();
+    const after = this.peek(1);
+    const glued = after.kind === "char" && after.text === "=" && !after.ws && !after.thin;
+    if (t.kind === "char") {
+      if (t.text === "=") { this.next(); return "="; }
+      if (t.text === "<" || t.text === ">") { this.next(); if (glued) { this.next(); return t.text === "<" ? "<=" : ">="; } return t.text; }
+      if ((t.text === "!" || t.text === ":") && glued) { this.next(); this.next(); return t.text === "!" ? "!=" : "="; }
+    }
+    if (t.kind === "cmd") {
+      const op = RELATION_COMMANDS[t.text];
+      if (op) { this.next(); return op; }
+      if (UNSUPPORTED_RELATIONS.has(t.text)) fail("unsupported", `\\${t.text} at ${t.pos} is not a relation the checker reads: use =, <, >, \\le, \\ge or \\neq`, t.pos);
+    }
+    return undefined;
+  }
+
+  private unexpected(t: LatexToken): never {
+    if (t.kind === "close") fail("unbalanced", `unbalanced ${this.text(t).slice(1, -1)} at ${t.pos}`, t.pos);
+    if (t.kind === "cmd" && t.text === "\\") fail("unexpected", `a line break \\\\ at ${t.pos}: write one relation per step`, t.pos);
+    if (t.kind === "end") fail("unexpected", `the source ends where a value was expected at ${t.pos}`, t.pos);
+    if (this.isChar(t, ",")) fail("unexpected", `unexpected ',' at ${t.pos}: write one relation per step`, t.pos);
+    return fail("unexpected", `unexpected ${this.text(t)} at ${t.pos}`, t.pos);
+  }
+
+  // ---- sums, products, powers ----------------------------------------------
+
+  private expression(): Expr {
+    this.enter(this.peek().pos);
+    const terms: Expr[] = [];
+    const first = this.peek();
+    if (this.isChar(first, "-")) { this.next(); terms.push(neg(this.term())); }
+    else { if (this.isChar(first, "+")) this.next(); terms.push(this.term()); }
+    for (;;) {
+      const t = this.peek();
+      if (this.isChar(t, "+")) { this.next(); terms.push(this.term()); }
+      else if (this.isChar(t, "-")) { this.next(); terms.push(neg(this.term())); }
+      else if (this.isCmd(t, "pm") || this.isCmd(t, "mp")) fail("unsupported", `\\${t.text} at ${t.pos}: write the two signs as two steps`, t.pos);
+      else break;
+    }
+    this.leave();
+    return terms.length === 1 ? terms[0] : add(...terms);
+  }
+
+  private term(): Expr {
+    let factors = this.tight();
+    for (;;) {
+      const t = this.peek();
+      if ((t.kind === "cmd" && PRODUCT_COMMANDS.has(t.text)) || this.isChar(t, "*")) { this.next(); factors.push(...this.tight()); }
+      else if (this.isChar(t, "/") || this.isCmd(t, "div")) { this.next(); factors = [div(product(factors), product(this.tight()))]; }
+      else break;
+    }
+    return product(factors);
+  }
+
+  /** A run of juxtaposed factors, optionally signed (`a \cdot -b`). */
+  private tight(): Expr[] {
+    const t = this.peek();
+    if (this.isChar(t, "-") || this.isChar(t, "+")) {
+      this.next();
+      this.enter(t.pos);
+      const inner = product(this.tight());
+      this.leave();
+      return [t.text === "-" ? neg(inner) : inner];
+    }
+    if (!this.startsFactor(t)) {
+      if (t.kind === "cmd" && PRODUCT_COMMANDS.has(t.text)) fail("unexpected", `\\${t.text} at ${t.pos} needs a factor before it`, t.pos);
+      this.unexpected(t);
+    }
+    const factors = [this.postfix()];
+    while (this.startsFactor(this.peek())) factors.push(this.postfix());
+    return factors;
+  }
+
+  private startsFactor(t: LatexToken): boolean {
+    switch (t.kind) {
+      case "letter": case "digit": case "lbrace": return true;
+      case "open": return true;
+      case "bar": return this.absDepth === 0;
+      case "char": return t.text === "." && this.peekIsDigitAfter(t);
+      case "cmd": return !ATOM_COMMANDS_NOT_FACTOR_START.has(t.text);
+      default: return false;
+    }
+  }
+  private peekIsDigitAfter(t: LatexToken): boolean {
+    const k = this.tokens.indexOf(t);
+    return k >= 0 && this.tokenAt(k + 1).kind === "digit";
+  }
+
+  private postfix(): Expr {
+    let base = this.atom();
+    let powered = false;
+    for (;;) {
+      const t = this.peek();
+      if (this.isChar(t, "^")) {
+        if (powered) fail("double_script", `double superscript at ${t.pos}: add braces, e.g. {x^{a}}^{b}`, t.pos);
+        this.next();
+        base = pow(base, this.script(t));
+        powered = true;
+      } else if (this.isChar(t, "_")) {
+        fail("unexpected", `a subscript at ${t.pos} can only follow a symbol`, t.pos);
+      } else if (this.isChar(t, "'")) {
+        fail("unsupported", `a prime at ${t.pos}: primes are read only on declared functions, as A'(r)`, t.pos);
+      } else if (this.isChar(t, "!") && !this.isChar(this.peek(1), "=")) {
+        fail("unsupported", `factorials are not read (at ${t.pos})`, t.pos);
+      } else break;
+    }
+    return base;
+  }
+
+  /** The argument of `^` (or of a log base): a braced group or one token. */
+  private script(at: LatexToken): Expr {
+    const t = this.peek();
+    if (t.kind === "lbrace") return this.braced(t, "superscript");
+    if (t.kind === "digit") { this.next(); return num(t.text); }
+    if (t.kind === "letter" || (t.kind === "cmd" && (LETTER_COMMANDS.has(t.text) || t.text === "pi" || t.text === "infty"))) {
+      return this.within({ start: this.i, end: this.i + 1, after: this.i + 1 }, () => this.atom());
+    }
+    if (this.isChar(t, "-") || this.isChar(t, "+")) fail("missing_argument", `a sign after ^ at ${at.pos} needs braces, e.g. x^{-1}`, t.pos);
+    return fail("missing_argument", `^ at ${at.pos} needs an exponent`, at.pos);
+  }
+
+  private braced(open: LatexToken, what: string): Expr {
+    const close = this.partner.get(this.i)!;
+    if (close === this.i + 1) fail("empty_group", `empty ${what} {} at ${open.pos}`, open.pos);
+    return this.within({ start: this.i + 1, end: close, after: close + 1 }, () => this.expression());
+  }
+
+  // ---- atoms --------------------------------------------------------------
+
+  private atom(): Expr {
+    const t = this.peek();
+    switch (t.kind) {
+      case "digit": return this.number();
+      case "char":
+        if (t.text === "." && this.peekIsDigitAfter(t)) return this.number();
+        return this.unexpected(t);
+      case "letter": return this.letters();
+      case "lbrace": {
+        this.enter(t.pos);
+        const e = this.braced(t, "group");
+        this.leave();
+        return e;
+      }
+      case "open": return this.delimited();
+      case "bar": return this.bars();
+      case "cmd": return this.command();
+      default: return this.unexpected(t);
+    }
+  }
+
+  /** Digits with an optional decimal point; `6.674\times10^{-11}` folds into one literal. */
+  private number(): Expr {
+    const start = this.peek().pos;
+    let text = "";
+    let seenPoint = false;
+    for (;;) {
+      const t = this.peek();
+      if (t.kind === "digit" && (text === "" || !t.thin)) { text += t.text; this.next(); }
+      else if (this.isChar(t, ".") && !seenPoint && this.tokenAt(this.i + 1).kind === "digit" && !t.thin) { seenPoint = true; text += "."; this.next(); }
+      else break;
+    }
+    if (text === "") fail("bad_number", `a number expected at ${start}`, start);
+    const exponent = this.powerOfTenAhead();
+    return num(exponent === undefined ? text : `${text}e${exponent}`);
+  }
+
+  /** Matches `\times 10^{k}` / `\cdot 10^{k}` with an integer k and consumes it, else leaves the stream alone. */
+  private powerOfTenAhead(): string | undefined {
+    const saved = this.i;
+    const op = this.peek();
+    if (!(this.isCmd(op, "times") || this.isCmd(op, "cdot"))) return undefined;
+    if (!(this.peek(1).text === "1" && this.peek(1).kind === "digit" && this.peek(2).text === "0" && this.peek(2).kind === "digit" && this.isChar(this.peek(3), "^"))) return undefined;
+    const digitAfterTen = this.peek(4);
+    let exponent: string | undefined;
+    let consumed = 0;
+    if (digitAfterTen.kind === "digit") { exponent = digitAfterTen.text; consumed = 5; }
+    else if (digitAfterTen.kind === "lbrace") {
+      const close = this.partner.get(this.i + 4)!;
+      const inner = this.tokens.slice(this.i + 5, close);
+      const body = inner.map((t) => t.text).join("");
+      if (inner.every((t) => t.kind === "digit" || (t.kind === "char" && (t.text === "-" || t.text === "+"))) && /^[-+]?\d+$/.test(body)) {
+        exponent = body.replace(/^\+/, "");
+        consumed = close + 1 - this.i;
+      }
+    }
+    if (exponent === undefined) { this.i = saved; return undefined; }
+    const nextAfter = this.tokenAt(this.i + consumed);
+    if (this.isChar(nextAfter, "^")) { this.i = saved; return undefined; }
+    this.i += consumed;
+    return exponent;
+  }
+
+  /** A run of letters: declared multi-letter names first, else one letter (with its subscript). */
+  private letters(): Expr {
+    const start = this.i;
+    let runEnd = start + 1;
+    while (runEnd < this.bound && this.tokens[runEnd].kind === "letter" && !this.tokens[runEnd].ws && !this.tokens[runEnd].thin) runEnd += 1;
+    const letterText = (from: number, to: number) => this.tokens.slice(from, to).map((t) => t.text).join("");
+    for (let k = runEnd - start; k >= 2; k -= 1) {
+      const base = letterText(start, start + k);
+      if (start + k === runEnd && this.isChar(this.tokenAt(runEnd), "_")) {
+        const sub = this.subscriptAt(runEnd);
+        if (this.options.declared.has(`${base}_${sub.text}`)) { this.i = sub.next; return this.named(`${base}_${sub.text}`); }
+      }
+      if (this.options.declared.has(base)) { this.i = start + k; return this.named(base); }
+    }
+    if (runEnd - start >= 2) {
+      const word = letterText(start, runEnd);
+      if (BARE_FUNCTION_WORDS.has(word)) fail("bare_function", `'${word}' at ${this.tokens[start].pos} reads as a product of letters: write \\${word}`, this.tokens[start].pos);
+    }
+    const letter = this.next();
+    if (this.isChar(this.peek(), "_") && this.i === runEnd) {
+      const sub = this.subscriptAt(this.i);
+      this.i = sub.next;
+      return this.named(`${letter.text}_${sub.text}`);
+    }
+    if (letter.text === "d" && !this.options.functions.has("d")) {
+      const differentialOf = this.differentialAhead();
+      if (differentialOf) return differentialOf;
+    }
+    if (letter.text === "e" && !this.options.symbols.has("e")) return euler;
+    return this.named(letter.text);
+  }
+
+  /** After a `d`: the differential of the symbol that follows, when this is a line element or the symbol is a declared coordinate. */
+  private differentialAhead(): Expr | undefined {
+    const name = this.symbolNameAt(this.i);
+    if (!name) return undefined;
+    if (!(this.lineElement || this.options.coordinates.has(name.text))) return undefined;
+    this.i = name.next;
+    return differential(name.text);
+  }
+
+  /** A symbol: declared function call, or plain symbol. */
+  private named(name: string): Expr {
+    if (this.options.functions.has(name)) {
+      let primes = 0;
+      while (this.isChar(this.peek(), "'")) { this.next(); primes += 1; }
+      const open = this.peek();
+      if (open.kind === "open" && (open.text === "(" || open.text === "[")) {
+        const args = this.argumentList();
+        const applied = call(name, ...args);
+        if (primes === 0) return applied;
+        const only = args.length === 1 ? args[0] : undefined;
+        if (only?.kind !== "sym") fail("bad_derivative", `${name}${"'".repeat(primes)} at ${open.pos} needs one symbol as its argument`, open.pos);
+        return deriv(applied, only.name, primes);
+      }
+      if (primes > 0) fail("missing_argument", `${name}' at ${open.pos} needs its argument, as ${name}'(r)`, open.pos);
+    }
+    return sym(name);
+  }
+
+  /** `( a, b )` after a declared function. */
+  private argumentList(): Expr[] {
+    const open = this.next();
+    this.enter(open.pos);
+    const args = [this.expression()];
+    while (this.isChar(this.peek(), ",")) { this.next(); args.push(this.expression()); }
+    this.closeFor(open);
+    this.leave();
+    return args;
+  }
+
+  /** Reads the closing delimiter for `open` or reports the imbalance. */
+  private closeFor(open: LatexToken): LatexToken {
+    const close = this.peek();
+    const opener = this.source.slice(open.pos, open.end);
+    if (close.kind !== "close") {
+      if (close.kind === "end") fail("unbalanced", `unbalanced ${opener} at ${open.pos}`, open.pos);
+      this.unexpected(close);
+    }
+    const pairs: Readonly<Record<string, string>> = { "(": ")", "[": "]", "{": "}", "|": "|" };
+    const fits = open.text === "." ? close.sized : close.text === "." ? open.sized : pairs[open.text] === close.text;
+    if (!fits) fail("unbalanced", `${this.source.slice(close.pos, close.end)} at ${close.pos} does not close ${opener} at ${open.pos}`, close.pos);
+    this.next();
+    return close;
+  }
+
+  /** `( … )`, `\left[ … \right]`, `\left. … \right|`, `\left| … \right|` (absolute value). */
+  private delimited(): Expr {
+    const open = this.next();
+    this.enter(open.pos);
+    const first = this.peek();
+    if (first.kind === "close") fail("empty_group", `empty parentheses at ${open.pos}`, open.pos);
+    const inner = this.expression();
+    const close = this.closeFor(open);
+    if (close.sized && close.text === "|" && (this.isChar(this.peek(), "_") || this.isChar(this.peek(), "^"))) {
+      fail("unsupported", `an evaluation bar at ${close.pos} is not read: substitute the value instead`, close.pos);
+    }
+    this.leave();
+    return open.text === "|" ? call("abs", inner) : inner;
+  }
+
+  private bars(): Expr {
+    const open = this.next();
+    this.enter(open.pos);
+    this.absDepth += 1;
+    const inner = this.expression();
+    this.absDepth -= 1;
+    const close = this.peek();
+    if (close.kind !== "bar") fail("unbalanced", `unbalanced | at ${open.pos}`, open.pos);
+    this.next();
+    if (this.isChar(this.peek(), "_")) fail("unsupported", `an evaluation bar at ${close.pos} is not read: substitute the value instead`, close.pos);
+    this.leave();
+    return call("abs", inner);
+  }
+
+  private command(): Expr {
+    const t = this.peek();
+    const name = t.text;
+    if (LETTER_COMMANDS.has(name)) {
+      this.next();
+      if (this.isChar(this.peek(), "_")) {
+        const sub = this.subscriptAt(this.i);
+        this.i = sub.next;
+        return this.named(`${name}_${sub.text}`);
+      }
+      return this.named(name);
+    }
+    switch (name) {
+      case "pi": this.next(); return this.options.symbols.has("pi") ? sym("pi") : pi;
+      case "infty": this.next(); return infinity;
+      case "frac": case "dfrac": case "tfrac": case "cfrac": return this.fraction();
+      case "sqrt": return this.root();
+      case "dot": case "ddot": case "dddot": return this.dotted();
+      case "lim": return this.limitOf();
+      case "rm": return this.wrapped(this.next(), this.rmContent());
+      case "partial": return fail("unsupported", `\\partial at ${t.pos} is read only in \\frac{\\partial f}{\\partial r}`, t.pos);
+      default: break;
+    }
+    if (FUNCTION_COMMANDS[name]) { this.next(); return this.applyFunction(FUNCTION_COMMANDS[name], t); }
+    if (WRAPPER_COMMANDS.has(name)) { this.next(); return this.wrapped(t, this.wrapperContent(t)); }
+    return fail("unknown_command", `unknown command \\${name} at ${t.pos}`, t.pos);
+  }
+
+  // ---- names and subscripts -----------------------------------------------
+
+  /** Reads the subscript whose `_` is at token `k`, without moving; returns its plain text and the index after it. */
+  private subscriptAt(k: number): { text: string; next: number } {
+    const underscore = this.tokenAt(k);
+    const t = this.tokenAt(k + 1);
+    if (t.kind === "lbrace") {
+      const close = this.partner.get(k + 1)!;
+      const text = this.subscriptText(k + 2, close, underscore);
+      return { text, next: close + 1 };
+    }
+    if (t.kind === "cmd" && WRAPPER_COMMANDS.has(t.text)) {
+      const open = k + 2;
+      if (this.tokenAt(open).kind !== "lbrace") fail("bad_name", `\\${t.text} at ${t.pos} needs braces`, t.pos);
+      const close = this.partner.get(open)!;
+      return { text: this.subscriptText(open + 1, close, underscore), next: close + 1 };
+    }
+    if (t.kind === "cmd" && t.text === "rm") {
+      let j = k + 2;
+      let text = "";
+      while (this.tokenAt(j).kind === "letter" && (j === k + 2 || (!this.tokenAt(j).ws && !this.tokenAt(j).thin))) { text += this.tokenAt(j).text; j += 1; }
+      if (text === "") fail("bad_name", `empty subscript at ${underscore.pos}`, underscore.pos);
+      return { text, next: j };
+    }
+    const piece = this.subscriptPiece(t, underscore);
+    return { text: piece, next: k + 2 };
+  }
+
+  private subscriptText(from: number, to: number, underscore: LatexToken): string {
+    let text = "";
+    for (let j = from; j < to; j += 1) {
+      const t = this.tokens[j];
+      if (t.kind === "lbrace") {
+        const close = this.partner.get(j)!;
+        text += this.subscriptText(j + 1, close, underscore);
+        j = close;
+      } else if (t.kind === "cmd" && (t.text === "rm" || t.text === "mathrm" || t.text === "text" || WRAPPER_COMMANDS.has(t.text))) {
+        // the braces that follow are read as a nested group on the next turn
+      } else if (this.isChar(t, "_")) {
+        text += "_";
+      } else {
+        text += this.subscriptPiece(t, underscore);
+      }
+    }
+    if (text === "" || text.startsWith("_") || text.endsWith("_")) fail("bad_name", `empty subscript at ${underscore.pos}`, underscore.pos);
+    return text;
+  }
+
+  private subscriptPiece(t: LatexToken, underscore: LatexToken): string {
+    if (t.kind === "letter" || t.kind === "digit") return t.text;
+    if (t.kind === "cmd" && (LETTER_COMMANDS.has(t.text) || SUBSCRIPT_COMMANDS.has(t.text))) return t.text;
+    if (this.isChar(t, "+")) return "plus";
+    if (this.isChar(t, "-")) return "minus";
+    if (t.kind === "end") return fail("bad_name", `empty subscript at ${underscore.pos}`, underscore.pos);
+    return fail("bad_name", `cannot read ${this.text(t)} at ${t.pos} in a subscript`, t.pos);
+  }
+
+  /** The symbol name starting at token `k` (a letter or letter command with its subscript), without moving. */
+  private symbolNameAt(k: number): { text: string; next: number } | undefined {
+    const t = this.tokenAt(k);
+    if (!(t.kind === "letter" || (t.kind === "cmd" && LETTER_COMMANDS.has(t.text)))) return undefined;
+    if (this.isChar(this.tokenAt(k + 1), "_")) {
+      const sub = this.subscriptAt(k + 1);
+      return { text: `${t.text}_${sub.text}`, next: sub.next };
+    }
+    return { text: t.text, next: k + 1 };
+  }
+
+  /** The text inside `\mathrm{…}`-like wrappers: one name of letters and digits. */
+  private wrapperContent(cmd: LatexToken): string {
+    const open = this.peek();
+    if (open.kind === "letter" || open.kind === "digit") { this.next(); return open.text; }
+    if (open.kind !== "lbrace") fail("missing_argument", `\\${cmd.text} at ${cmd.pos} needs braces`, cmd.pos);
+    const close = this.partner.get(this.i)!;
+    const inner = this.tokens.slice(this.i + 1, close);
+    const text = inner.map((t) => t.text).join("");
+    if (!(inner.length > 0 && inner.every((t, j) => (t.kind === "letter" || t.kind === "digit") && (j === 0 || (!t.ws && !t.thin))) && /^[A-Za-z]/.test(text))) {
+      fail("bad_name", `\\${cmd.text}{…} at ${cmd.pos} must hold one name of letters and digits`, cmd.pos);
+    }
+    this.i = close + 1;
+    return text;
+  }
+
+  /** `\rm d` or `{\rm eff}`: the letters after `\rm`. */
+  private rmContent(): string {
+    let text = "";
+    const first = this.peek();
+    while (this.peek().kind === "letter" && (text === "" || (!this.peek().ws && !this.peek().thin))) text += this.next().text;
+    if (text === "") fail("missing_argument", `\\rm at ${first.pos} needs letters after it`, first.pos);
+    return text;
+  }
+
+  /** Meaning of an upright name: d (differential), e (Euler), a function, or one symbol. */
+  private wrapped(cmd: LatexToken, content: string): Expr {
+    if (content === "d" && cmd.text !== "operatorname") {
+      const name = this.symbolNameAt(this.i);
+      if (!name) fail("missing_argument", `the differential at ${cmd.pos} needs a coordinate after it`, cmd.pos);
+      this.i = name.next;
+      return differential(name.text);
+    }
+    if (content === "e" && cmd.text !== "operatorname") return euler;
+    const builtin = FUNCTION_COMMANDS[content] ?? (["sqrt", "abs", "asin", "acos", "atan", "exp", "log"].includes(content) ? content : undefined);
+    if (builtin) return this.applyFunction(builtin, cmd);
+    let name = content;
+    if (this.isChar(this.peek(), "_")) {
+      const sub = this.subscriptAt(this.i);
+      this.i = sub.next;
+      name = `${content}_${sub.text}`;
+    }
+    if (cmd.text === "operatorname" && !this.options.functions.has(name)) {
+      fail("unknown_function", `unknown function \\operatorname{${content}} at ${cmd.pos}: declare it as a function`, cmd.pos);
+    }
+    return this.named(name);
+  }
+
+  // ---- functions, roots, dots, limits --------------------------------------
+
+  private applyFunction(fn: string, at: LatexToken): Expr {
+    let base: Expr | undefined;
+    let power: Expr | undefined;
+    let name = fn;
+    if (fn === "log" && this.isChar(this.peek(), "_")) { this.next(); base = this.script(at); }
+    if (this.isChar(this.peek(), "^")) {
+      const caret = this.next();
+      power = this.script(caret);
+      const inverse: Readonly<Record<string, string>> = { sin: "asin", cos: "acos", tan: "atan" };
+      if (isMinusOne(power)) {
+        if (!inverse[fn]) fail("unsupported", `\\${at.text}^{-1} at ${at.pos}: write the inverse function or \\left(…\\right)^{-1}`, at.pos);
+        name = inverse[fn];
+        power = undefined;
+      }
+    }
+    const arg = this.functionArgument(at);
+    let result: Expr = call(name, arg);
+    if (base) result = div(result, call("log", base));
+    return power ? pow(result, power) : result;
+  }
+
+  private functionArgument(at: LatexToken): Expr {
+    const t = this.peek();
+    if ((t.kind === "open" && t.text !== "|") || t.kind === "lbrace") return this.atom();
+    if (fnName(at) === "sqrt") return this.atom();
+    const items: Expr[] = [];
+    for (;;) {
+      const n = this.peek();
+      if (items.length > 0 && n.thin) break;
+      const isName = n.kind === "letter" || (n.kind === "cmd" && (LETTER_COMMANDS.has(n.text) || n.text === "pi" || n.text === "infty"));
+      if (!(isName || n.kind === "digit")) break;
+      if (n.kind === "letter" && n.text === "d" && !this.options.declared.has("d")) break;
+      items.push(this.postfix());
+    }
+    if (items.length === 0) fail("missing_argument", `\\${at.text} at ${at.pos} needs an argument`, at.pos);
+    return product(items);
+  }
+
+  private root(): Expr {
+    const t = this.next();
+    let index: Expr | undefined;
+    const open = this.peek();
+    if (open.kind === "open" && open.text === "[" && !open.sized) {
+      this.next();
+      this.enter(open.pos);
+      index = this.expression();
+      this.closeFor(open);
+      this.leave();
+    }
+    const radicand = this.argument(t, "\\sqrt");
+    if (!index || (index.kind === "num" && index.value === "2")) return call("sqrt", radicand);
+    return pow(radicand, div(num(1), index));
+  }
+
+  /** One macro argument: a braced group or a single token. */
+  private argument(cmd: LatexToken, what: string): Expr {
+    const range = this.argumentRange(cmd, what);
+    this.enter(cmd.pos);
+    const e = this.within(range, () => this.expression());
+    this.leave();
+    return e;
+  }
+
+  private argumentRange(cmd: LatexToken, what: string): Range {
+    const t = this.peek();
+    if (t.kind === "lbrace") {
+      const close = this.partner.get(this.i)!;
+      if (close === this.i + 1) fail("empty_group", `empty argument of ${what} at ${cmd.pos}`, t.pos);
+      return { start: this.i + 1, end: close, after: close + 1 };
+    }
+    if (t.kind === "letter" || t.kind === "digit" || (t.kind === "cmd" && (LETTER_COMMANDS.has(t.text) || t.text === "pi" || t.text === "infty"))) {
+      return { start: this.i, end: this.i + 1, after: this.i + 1 };
+    }
+    return fail("missing_argument", `${what} at ${cmd.pos} is missing an argument`, cmd.pos);
+  }
+
+  private dotted(): Expr {
+    const t = this.next();
+    const order = t.text === "dot" ? 1 : t.text === "ddot" ? 2 : 3;
+    const range = this.argumentRange(t, `\\${t.text}`);
+    const name = this.symbolNameAt(range.start);
+    if (!name || name.next !== range.end) fail("bad_name", `\\${t.text} at ${t.pos} applies to one symbol`, t.pos);
+    this.i = range.after;
+    let text = name.text;
+    if (this.isChar(this.peek(), "_") && !text.includes("_")) {
+      const sub = this.subscriptAt(this.i);
+      this.i = sub.next;
+      text = `${text}_${sub.text}`;
+    }
+    return dot(text, order);
+  }
+
+  private limitOf(): Expr {
+    const t = this.next();
+    if (!this.isChar(this.peek(), "_")) fail("missing_argument", `\\lim at ${t.pos} needs _{x \\to a}`, t.pos);
+    this.next();
+    const open = this.peek();
+    if (open.kind !== "lbrace") fail("missing_argument", `\\lim at ${t.pos} needs _{x \\to a}`, t.pos);
+    const close = this.partner.get(this.i)!;
+    const name = this.symbolNameAt(this.i + 1);
+    const arrow = name ? this.tokenAt(name.next) : open;
+    if (!name || !(this.isCmd(arrow, "to") || this.isCmd(arrow, "rightarrow") || this.isCmd(arrow, "longrightarrow"))) {
+      fail("missing_argument", `\\lim at ${t.pos} needs _{x \\to a}`, t.pos);
+    }
+    if (name.next + 1 >= close) fail("missing_argument", `\\lim at ${t.pos} needs a value after \\to`, arrow.pos);
+    this.enter(t.pos);
+    const to = this.within({ start: name.next + 1, end: close, after: close + 1 }, () => this.expression());
+    if (!this.startsFactor(this.peek()) && !this.isChar(this.peek(), "-")) fail("missing_argument", `\\lim at ${t.pos} needs something to take the limit of`, t.pos);
+    const of = product(this.tight());
+    this.leave();
+    return limit(of, name.text, to);
+  }
+
+  // ---- fractions and Leibniz derivatives ------------------------------------
+
+  private fraction(): Expr {
+    const t = this.next();
+    const numerator = this.argumentRange(t, `\\${t.text}`);
+    this.i = numerator.after;
+    const denominator = this.argumentRange(t, `\\${t.text}`);
+    this.enter(t.pos);
+    const leibniz = this.leibniz(t, numerator, denominator);
+    if (leibniz) { this.leave(); return leibniz; }
+    const n = this.within(numerator, () => this.expression());
+    const d = this.within(denominator, () => this.expression());
+    this.leave();
+    return div(n, d);
+  }
+
+  /** `d`, `\mathrm{d}`, `{\rm d}` or `\partial` at token k, with an optional order `^2` when allowed. */
+  private derivOperatorAt(k: number, end: number, allowOrder: boolean): DerivOperator | undefined {
+    const t = this.tokens[k];
+    if (k >= end || !t) return undefined;
+    let partial = false;
+    let next: number;
+    if (t.kind === "letter" && t.text === "d") next = k + 1;
+    else if (t.kind === "cmd" && t.text === "partial") { partial = true; next = k + 1; }
+    else if (t.kind === "cmd" && (t.text === "mathrm" || t.text === "text" || t.text === "textrm")) {
+      const a = this.tokens[k + 1];
+      if (a?.kind === "letter" && a.text === "d") next = k + 2;
+      else if (a?.kind === "lbrace" && this.tokens[k + 2]?.text === "d" && this.tokens[k + 2]?.kind === "letter" && this.tokens[k + 3]?.kind === "rbrace") next = k + 4;
+      else return undefined;
+    } else if (t.kind === "lbrace" && this.isCmd(this.tokens[k + 1], "rm") && this.tokens[k + 2]?.kind === "letter" && this.tokens[k + 2]?.text === "d" && this.tokens[k + 3]?.kind === "rbrace") next = k + 4;
+    else return undefined;
+    let order = 1;
+    if (allowOrder && next < end && this.isChar(this.tokens[next], "^")) {
+      const o = this.tokens[next + 1];
+      if (o?.kind === "digit") { order = Number(o.text); next += 2; }
+      else if (o?.kind === "lbrace") {
+        const close = this.partner.get(next + 1)!;
+        const body = this.tokens.slice(next + 2, close);
+        if (!(body.length > 0 && body.every((b) => b.kind === "digit"))) return undefined;
+        order = Number(body.map((b) => b.text).join(""));
+        next = close + 1;
+      } else return undefined;
+    }
+    if (next > end) return undefined;
+    return { partial, order, next };
+  }
+
+  /** The variable after a d/∂ in a denominator: a symbol, or a dotted symbol for partials (`\partial \dot r` → `r_dot`). */
+  private variableAt(k: number, end: number): { name: string; next: number } | undefined {
+    const t = this.tokens[k];
+    if (k >= end || !t) return undefined;
+    if (t.kind === "cmd" && (t.text === "dot" || t.text === "ddot")) {
+      const order = t.text === "dot" ? 1 : 2;
+      const open = this.tokens[k + 1];
+      if (open?.kind === "lbrace") {
+        const close = this.partner.get(k + 1)!;
+        const inner = this.symbolNameAt(k + 2);
+        if (!inner || inner.next !== close) return undefined;
+        return { name: dotVariable(inner.text, order), next: close + 1 };
+      }
+      const inner = this.symbolNameAt(k + 1);
+      return inner ? { name: dotVariable(inner.text, order), next: inner.next } : undefined;
+    }
+    const s = this.symbolNameAt(k);
+    return s ? { name: s.text, next: s.next } : undefined;
+  }
+
+  private leibniz(frac: LatexToken, numerator: Range, denominator: Range): Expr | undefined {
+    const op = this.derivOperatorAt(numerator.start, numerator.end, true);
+    if (!op) return undefined;
+    const items: { by: string; order: number }[] = [];
+    let k = denominator.start;
+    while (k < denominator.end) {
+      const dop = this.derivOperatorAt(k, denominator.end, false);
+      if (!dop || dop.partial !== op.partial) return undefined;
+      const variable = this.variableAt(dop.next, denominator.end);
+      if (!variable) return undefined;
+      k = variable.next;
+      let order = 1;
+      if (k < denominator.end && this.isChar(this.tokens[k], "^")) {
+        const o = this.tokens[k + 1];
+        if (o?.kind === "digit") { order = Number(o.text); k += 2; }
+        else if (o?.kind === "lbrace") {
+          const close = this.partner.get(k + 1)!;
+          const body = this.tokens.slice(k + 2, close);
+          if (!(body.length > 0 && body.every((b) => b.kind === "digit"))) return undefined;
+          order = Number(body.map((b) => b.text).join(""));
+          k = close + 1;
+        } else return undefined;
+      }
+      items.push({ by: variable.name, order });
+    }
+    if (items.length === 0) return undefined;
+    const total = items.reduce((s, it) => s + it.order, 0);
+    if (total !== op.order) fail("bad_derivative", `the derivative at ${frac.pos} has order ${op.order} above and ${total} below`, frac.pos);
+    if (!op.partial && items.length > 1) fail("bad_derivative", `a total derivative at ${frac.pos} by more than one variable`, frac.pos);
+    if (op.order < 1 || op.order > 20) fail("bad_derivative", `the derivative order at ${frac.pos} must be from 1 to 20`, frac.pos);
+    let of: Expr;
+    let fromNumerator = false;
+    if (op.next < numerator.end) {
+      of = this.within({ start: op.next, end: numerator.end, after: denominator.after }, () => this.expression());
+      fromNumerator = true;
+    } else {
+      this.i = denominator.after;
+      if (!this.startsFactor(this.peek())) fail("missing_argument", `the derivative at ${frac.pos} needs something to act on`, frac.pos);
+      of = this.postfix();
+    }
+    this.i = Math.max(this.i, denominator.after);
+    if (fromNumerator && !op.partial && items[0].by === this.options.parameter) {
+      if (of.kind === "sym") return dot(of.name, op.order);
+      if (of.kind === "dot") return dot(of.name, of.order + op.order);
+    }
+    let result = of;
+    for (let j = items.length - 1; j >= 0; j -= 1) result = deriv(result, items[j].by, items[j].order, op.partial);
+    return result;
+  }
+
+  // ---- context ------------------------------------------------------------
+
+  /** `ds^2`, `d\tau^2`, `d\sigma^2` (with d, \mathrm{d} or {\rm d}) at the start mark a line element. */
+  private startsLikeLineElement(): boolean {
+    const op = this.derivOperatorAt(0, this.tokens.length - 1, false);
+    if (!op || op.partial) return false;
+    const v = this.tokens[op.next];
+    const isInterval = (v?.kind === "letter" && v.text === "s") || (v?.kind === "cmd" && (v.text === "tau" || v.text === "sigma"));
+    return isInterval && this.isChar(this.tokens[op.next + 1], "^");
+  }
+}
+
+function product(factors: Expr[]): Expr {
+  return factors.length === 1 ? factors[0] : mul(...factors);
+}
+
+function isMinusOne(e: Expr): boolean {
+  return (e.kind === "neg" && e.arg.kind === "num" && e.arg.value === "1") || (e.kind === "num" && e.value === "-1");
+}
+
+function fnName(t: LatexToken): string {
+  return t.text;
+}
