@@ -278,6 +278,12 @@ class LatexReader {
         return this.unexpected(t);
       case "letter": return this.letters();
       case "lbrace": {
+        if (this.isCmd(this.tokenAt(this.i + 1), "rm") && this.tokenAt(this.i + 2).text === "d" && this.tokenAt(this.i + 3).kind === "rbrace") {
+          // `{\rm d}r`: the old-style upright differential.
+          const rm = this.tokenAt(this.i + 1);
+          this.i += 4;
+          return this.wrapped(rm, "d");
+        }
         this.enter(t.pos);
         const e = this.braced(t, "group");
         this.leave();
@@ -388,6 +394,15 @@ class LatexReader {
         return deriv(applied, only.name, primes);
       }
       if (primes > 0) fail("missing_argument", `${name}' at ${open.pos} needs its argument, as ${name}'(r)`, open.pos);
+      if (this.isChar(open, "^")) {
+        // `a^2(t)`: the power of a declared function, as (a(t))^2.
+        const saved = this.i;
+        this.next();
+        const power = this.script(open);
+        const paren = this.peek();
+        if (paren.kind === "open" && (paren.text === "(" || paren.text === "[")) return pow(call(name, ...this.argumentList()), power);
+        this.i = saved;
+      }
     }
     return sym(name);
   }
@@ -526,6 +541,7 @@ class LatexReader {
   private subscriptPiece(t: LatexToken, underscore: LatexToken): string {
     if (t.kind === "letter" || t.kind === "digit") return t.text;
     if (t.kind === "cmd" && (LETTER_COMMANDS.has(t.text) || SUBSCRIPT_COMMANDS.has(t.text))) return t.text;
+    if (this.isChar(t, "*")) return "ast";
     if (this.isChar(t, "+")) return "plus";
     if (this.isChar(t, "-")) return "minus";
     if (t.kind === "end") return fail("bad_name", `empty subscript at ${underscore.pos}`, underscore.pos);
@@ -615,8 +631,9 @@ class LatexReader {
 
   private functionArgument(at: LatexToken): Expr {
     const t = this.peek();
-    if ((t.kind === "open" && t.text !== "|") || t.kind === "lbrace") return this.atom();
-    if (fnName(at) === "sqrt") return this.atom();
+    if (t.kind === "open" || t.kind === "lbrace" || t.kind === "bar") return this.atom();
+    // `\cosh\frac{g\tau}{c}`: a fraction right after the function is its whole argument.
+    if (t.kind === "cmd" && ["frac", "dfrac", "tfrac", "sqrt"].includes(t.text)) return this.postfix();
     const items: Expr[] = [];
     for (;;) {
       const n = this.peek();
@@ -840,8 +857,4 @@ function product(factors: Expr[]): Expr {
 
 function isMinusOne(e: Expr): boolean {
   return (e.kind === "neg" && e.arg.kind === "num" && e.arg.value === "1") || (e.kind === "num" && e.value === "-1");
-}
-
-function fnName(t: LatexToken): string {
-  return t.text;
 }
