@@ -16,7 +16,9 @@ const scripts = readdirSync(here)
 let failed = 0;
 for (const script of scripts) {
   console.log(`\n=== ${script}`);
-  const run = spawnSync(process.execPath, ["--import", "tsx", path.join(here, script)], { stdio: "inherit" });
+  // The server-only hook lets scripts load server modules outside Next, as server.ts does.
+  const hook = path.join(here, "../../app/_server/server-only-hook.mjs");
+  const run = spawnSync(process.execPath, ["--import", "tsx", "--import", hook, path.join(here, script)], { stdio: "inherit" });
   if (run.status !== 0) {
     failed += 1;
     console.log(`(${script} exited with ${run.status ?? run.signal})`);
