@@ -132,7 +132,11 @@ class LatexReader {
       if (this.relationAhead()) fail("chain", `a second relation at ${again.pos}: write one relation per step`, again.pos);
     }
     const tail = this.peek();
-    if (this.isChar(tail, ",") || this.isChar(tail, ".") || this.isChar(tail, ";")) this.next();
+    if (this.isChar(tail, ",") || this.isChar(tail, ".") || this.isChar(tail, ";")) {
+      this.next();
+      const more = this.peek();
+      if (more.kind !== "end") fail("unexpected", `more after '${tail.text}' at ${tail.pos}: write one relation per step`, more.pos);
+    }
     const end = this.peek();
     if (end.kind !== "end") this.unexpected(end);
     return result;
@@ -284,9 +288,7 @@ class LatexReader {
           this.i += 4;
           return this.wrapped(rm, "d");
         }
-        this.enter(t.pos);
         const e = this.braced(t, "group");
-        this.leave();
         return e;
       }
       case "open": return this.delimited();
@@ -410,11 +412,9 @@ class LatexReader {
   /** `( a, b )` after a declared function. */
   private argumentList(): Expr[] {
     const open = this.next();
-    this.enter(open.pos);
     const args = [this.expression()];
     while (this.isChar(this.peek(), ",")) { this.next(); args.push(this.expression()); }
     this.closeFor(open);
-    this.leave();
     return args;
   }
 
@@ -436,7 +436,6 @@ class LatexReader {
   /** `( … )`, `\left[ … \right]`, `\left. … \right|`, `\left| … \right|` (absolute value). */
   private delimited(): Expr {
     const open = this.next();
-    this.enter(open.pos);
     const first = this.peek();
     if (first.kind === "close") fail("empty_group", `empty parentheses at ${open.pos}`, open.pos);
     const inner = this.expression();
@@ -444,13 +443,11 @@ class LatexReader {
     if (close.sized && close.text === "|" && (this.isChar(this.peek(), "_") || this.isChar(this.peek(), "^"))) {
       fail("unsupported", `an evaluation bar at ${close.pos} is not read: substitute the value instead`, close.pos);
     }
-    this.leave();
     return open.text === "|" ? call("abs", inner) : inner;
   }
 
   private bars(): Expr {
     const open = this.next();
-    this.enter(open.pos);
     this.absDepth += 1;
     const inner = this.expression();
     this.absDepth -= 1;
@@ -458,7 +455,6 @@ class LatexReader {
     if (close.kind !== "bar") fail("unbalanced", `unbalanced | at ${open.pos}`, open.pos);
     this.next();
     if (this.isChar(this.peek(), "_")) fail("unsupported", `an evaluation bar at ${close.pos} is not read: substitute the value instead`, close.pos);
-    this.leave();
     return call("abs", inner);
   }
 
@@ -487,6 +483,7 @@ class LatexReader {
     }
     if (FUNCTION_COMMANDS[name]) { this.next(); return this.applyFunction(FUNCTION_COMMANDS[name], t); }
     if (WRAPPER_COMMANDS.has(name)) { this.next(); return this.wrapped(t, this.wrapperContent(t)); }
+    if (name === "\\") this.unexpected(t);
     return fail("unknown_command", `unknown command \\${name} at ${t.pos}`, t.pos);
   }
 
@@ -653,10 +650,8 @@ class LatexReader {
     const open = this.peek();
     if (open.kind === "open" && open.text === "[" && !open.sized) {
       this.next();
-      this.enter(open.pos);
       index = this.expression();
       this.closeFor(open);
-      this.leave();
     }
     const radicand = this.argument(t, "\\sqrt");
     if (!index || (index.kind === "num" && index.value === "2")) return call("sqrt", radicand);
@@ -666,9 +661,7 @@ class LatexReader {
   /** One macro argument: a braced group or a single token. */
   private argument(cmd: LatexToken, what: string): Expr {
     const range = this.argumentRange(cmd, what);
-    this.enter(cmd.pos);
     const e = this.within(range, () => this.expression());
-    this.leave();
     return e;
   }
 
@@ -676,7 +669,7 @@ class LatexReader {
     const t = this.peek();
     if (t.kind === "lbrace") {
       const close = this.partner.get(this.i)!;
-      if (close === this.i + 1) fail("empty_group", `empty argument of ${what} at ${cmd.pos}`, t.pos);
+      if (close === this.i + 1) fail("empty_group", `empty argument {} at ${t.pos} of ${what} at ${cmd.pos}`, t.pos);
       return { start: this.i + 1, end: close, after: close + 1 };
     }
     if (t.kind === "letter" || t.kind === "digit" || (t.kind === "cmd" && (LETTER_COMMANDS.has(t.text) || t.text === "pi" || t.text === "infty"))) {
@@ -729,12 +722,13 @@ class LatexReader {
     const numerator = this.argumentRange(t, `\\${t.text}`);
     this.i = numerator.after;
     const denominator = this.argumentRange(t, `\\${t.text}`);
+    // A derivative in operator form applies to the next factor without a group between: count it as a level.
     this.enter(t.pos);
     const leibniz = this.leibniz(t, numerator, denominator);
-    if (leibniz) { this.leave(); return leibniz; }
+    this.leave();
+    if (leibniz) return leibniz;
     const n = this.within(numerator, () => this.expression());
     const d = this.within(denominator, () => this.expression());
-    this.leave();
     return div(n, d);
   }
 

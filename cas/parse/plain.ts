@@ -92,7 +92,7 @@ class PlainReader {
 
   private expect(text: string, what: string): Token {
     const t = this.peek();
-    if (t.kind !== "op" || t.text !== text) fail("unexpected", `expected '${text}' ${what} at ${t.pos}, found ${describe(t)}`, t.pos);
+    if (t.kind !== "op" || t.text !== text) fail("unexpected", `expected '${text}' at ${t.pos} ${what}, found ${describe(t)}`, t.pos);
     return this.next();
   }
 
