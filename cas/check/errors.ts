@@ -8,7 +8,7 @@
 export type CasErrorCode = "malformed" | "unreadable" | "too_large" | "timeout" | "unknown_verb" | "internal";
 
 export class CasRequestError extends Error {
-  constructor(readonly code: CasErrorCode, message: string, readonly position?: number) {
+  constructor(readonly code: CasErrorCode, message: string, readonly position?: number, readonly field?: string) {
     super(message);
     this.name = "CasRequestError";
   }

@@ -3,6 +3,7 @@ import type { Expr, Relation } from "../expr/types";
 import { freeVariables } from "../expr/traverse";
 import { add, neg } from "../expr/build";
 import { differentiate } from "../calculus/differentiate";
+import { polynomialDegree } from "./degree";
 import { decimalContext, evaluateDecimal, type DecimalContext } from "../numeric/evaluate";
 import { conditionHolds, pointSampler, type Point } from "../numeric/sample";
 import { solveFor } from "../numeric/solve";
@@ -15,7 +16,7 @@ export interface ProbeSettings {
   readonly points: number;
 }
 
-export const DEFAULT_PROBE: ProbeSettings = { digits: 50, points: 12 };
+export const DEFAULT_PROBE: ProbeSettings = { digits: 40, points: 12 };
 
 /** A claim to test on the set where the premises and conditions hold. */
 export interface ImplicationProblem {
@@ -26,6 +27,8 @@ export interface ImplicationProblem {
   readonly fixed: readonly { variable: string; value: Expr }[];
   readonly signed: ReadonlySet<string>;
   readonly claim: Relation;
+  /** Variables never solved for: the parameter's differential dτ (dividing by dτ² presumes dτ ≠ 0, and dτ = 0 would solve any line element). */
+  readonly keep?: ReadonlySet<string>;
 }
 
 export type ProbeOutcome =
@@ -42,13 +45,19 @@ function candidateVariables(problem: ImplicationProblem): string[][] {
   for (const c of problem.conditions) for (const v of freeVariables(c)) bounded.add(v);
   const taken = new Set<string>();
   return problem.premises.map((p) => {
-    const mine = [...freeVariables(p)].filter((v) => !fixed.has(v) && !taken.has(v));
-    mine.sort((a, b) => rank(a) - rank(b));
+    const mine = [...freeVariables(p)].filter((v) => !fixed.has(v) && !taken.has(v) && !problem.keep?.has(v));
+    const difference = add(p.lhs, neg(p.rhs));
+    const score = new Map(mine.map((v) => [v, rank(v) + degreePenalty(polynomialDegree(difference, v))]));
+    mine.sort((a, b) => score.get(a)! - score.get(b)!);
     for (const v of freeVariables(p)) taken.add(v);
     return mine;
   });
   function rank(v: string): number {
     return (problem.signed.has(v) ? 0 : 2) + (bounded.has(v) ? 1 : 0);
+  }
+  // A closed-form root (degree 1 or 2) beats everything else; Newton on a rational function is the last resort.
+  function degreePenalty(d: number | null): number {
+    return d === 1 ? 0 : d === 2 ? 4 : 8;
   }
 }
 
@@ -95,15 +104,18 @@ export function probeImplication(problem: ImplicationProblem, rng: RandomStream,
   let unclear = 0;
   let evaluationFailure: string | null = null;
   const budget = settings.points * 12;
+  // Plans take turns after a failed solve, so a variable with no real root at most points (dτ² = −…) does not eat the budget.
   for (let attempt = 0, plan = 0; attempt < budget && found < settings.points; attempt += 1) {
-    if (found === 0 && attempt > 0 && attempt % Math.ceil(budget / plans.length) === 0) plan = Math.min(plan + 1, plans.length - 1);
     let point: Point | null = draw();
     if (!point) continue;
     for (let i = 0; i < problem.premises.length && point; i += 1) {
       const p = problem.premises[i];
       point = solveFor(D, p.lhs, p.rhs, plans[plan][i].derivative, plans[plan][i].variable, point);
     }
-    if (!point) continue;
+    if (!point) {
+      plan = (plan + 1) % plans.length;
+      continue;
+    }
     const here = point;
     if (!problem.conditions.every((c) => conditionHolds(D, c, here))) continue;
     let size: Decimal;

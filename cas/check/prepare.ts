@@ -30,6 +30,8 @@ export interface PreparedProblem {
   readonly signed: Set<string>;
   /** Formulas of the concrete functions standing in for undetermined ones. */
   readonly functions: Record<string, string>;
+  /** Variables the sampler must not solve for (the parameter's differential). */
+  readonly keep: Set<string>;
 }
 
 interface Macro { params: string[]; body: Expr }
@@ -183,5 +185,5 @@ export function prepareProblem(statements: readonly Statement[], context: Parsed
   }
   const functions: Record<string, string> = {};
   registry.forEach((entry, name) => { functions[name] = entry.f.formula; });
-  return { statements: flat, constraints: flatImplicit, fixed, conditions, signed, functions };
+  return { statements: flat, constraints: flatImplicit, fixed, conditions, signed, functions, keep: new Set([differentialVariable(context.parameter)]) };
 }

@@ -21,6 +21,8 @@ export interface CheckContext {
   readonly assumptions?: readonly string[];
   /** The curve parameter dotted symbols are derivatives by (default "\\tau"). */
   readonly parameter?: string;
+  /** Coordinates (LaTeX), so `dr` reads as a differential and d/dτ moves them; default: the declared symbols among t, r, θ, φ, x, y, z. */
+  readonly coordinates?: readonly string[];
 }
 
 export type Justification =
@@ -36,6 +38,8 @@ export interface CheckRequest {
   readonly from: string;
   readonly to: string;
   readonly justification?: Justification;
+  /** The syntax of `from`, `to` and every relation: LaTeX (default) or the plain calculator syntax. */
+  readonly syntax?: "latex" | "plain";
 }
 
 export type VerdictName = "verified" | "refuted" | "undecided";
@@ -57,6 +61,12 @@ export interface DimensionReport {
   readonly terms: readonly TermDimension[];
   /** Index into `terms` of the term that disagrees with the majority, when there is one. */
   readonly odd?: number;
+  /** "unknown" when a symbol has no declared dimension (then `consistent` is false but nothing is wrong yet). */
+  readonly status?: "consistent" | "inconsistent" | "unknown";
+  /** Symbols (plain identifiers) whose dimension was needed but not declared. */
+  readonly unknownSymbols?: readonly string[];
+  /** What is wrong inside terms, e.g. "the argument of sin has dimension L; it must be dimensionless". */
+  readonly problems?: readonly string[];
 }
 
 export interface CheckAnswer {
@@ -74,5 +84,6 @@ export interface CheckAnswer {
 
 /** A request the engine refused to run (malformed, too large, timed out). */
 export interface CheckError {
-  readonly error: { readonly code: string; readonly message: string; readonly position?: number };
+  /** `position` is a character offset within the request field named by `field` ("from", "to", "context.definitions[0]", …). */
+  readonly error: { readonly code: string; readonly message: string; readonly position?: number; readonly field?: string };
 }

@@ -54,7 +54,7 @@ function implication(problem: PreparedProblem, premise: Statement | null, claim:
   const conditions = [...problem.conditions];
   if (premise && premise.kind === "relation") (premise.op === "=" ? premises : conditions).unshift(premise);
   const claimRelation = claim.kind === "relation" ? claim : relation(claim, "=", num(0));
-  return probeImplication({ premises, conditions, fixed: problem.fixed, signed: problem.signed, claim: claimRelation }, rng, settings);
+  return probeImplication({ premises, conditions, fixed: problem.fixed, signed: problem.signed, claim: claimRelation, keep: problem.keep }, rng, settings);
 }
 
 /** An expression step `from → to` means equal values; a relation step means `to` follows from `from`. */

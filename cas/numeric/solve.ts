@@ -1,6 +1,6 @@
 import type Decimal from "decimal.js";
 import type { Expr } from "../expr/types";
-import { evaluateDecimal, type DecimalContext } from "./evaluate";
+import { evaluateDecimal, evaluateFloat, type DecimalContext } from "./evaluate";
 import { residual, relativeSize, zeroTolerance } from "./residual";
 import type { Point } from "./sample";
 
@@ -17,12 +17,15 @@ import type { Point } from "./sample";
  */
 export function solveFor(D: DecimalContext, lhs: Expr, rhs: Expr, derivative: Expr, variable: string, point: Point): Point | null {
   const start = point[variable] ?? new D(1);
-  const starts = [start, start.times(2), start.div(2), start.neg(), start.times(10), new D(1), new D(-1)];
+  const quadratic = solveQuadratic(D, lhs, rhs, variable, point, start);
+  if (quadratic !== undefined) return quadratic;
+  const rough = floatNewton(lhs, rhs, derivative, variable, point, start.toNumber());
+  const starts = rough === null ? [start, start.neg(), start.times(3), start.div(3)] : [new D(rough), start, start.neg()];
   const stepTolerance = new D(10).pow(-(D.precision - 6));
   const tolerance = zeroTolerance(D);
   for (const x0 of starts) {
     let x = x0;
-    for (let i = 0; i < 80; i += 1) {
+    for (let i = 0; i < 40; i += 1) {
       const at: Point = { ...point, [variable]: x };
       let f: Decimal;
       let df: Decimal;
@@ -48,6 +51,76 @@ export function solveFor(D: DecimalContext, lhs: Expr, rhs: Expr, derivative: Ex
         }
         break;
       }
+    }
+  }
+  return null;
+}
+
+/**
+ * Most relations in a derivation are linear or quadratic in the variable
+ * solved for (ṙ², E², L²): detect that from four values and take the root in
+ * closed form, the one nearer the drawn value. Returns undefined when the
+ * relation is not a quadratic in the variable (Newton then runs), null when it
+ * is one without a real root.
+ */
+function solveQuadratic(D: DecimalContext, lhs: Expr, rhs: Expr, variable: string, point: Point, start: Decimal): Point | null | undefined {
+  const at = (v: Decimal | number) => residual(D, lhs, rhs, { ...point, [variable]: new D(v) });
+  let f0, f1, fm, fs;
+  try {
+    [f0, f1, fm, fs] = [at(0), at(1), at(-1), at(start)];
+  } catch {
+    return undefined;
+  }
+  const a = f1.value.plus(fm.value).div(2).minus(f0.value);
+  const b = f1.value.minus(fm.value).div(2);
+  const c = f0.value;
+  const predicted = a.times(start).times(start).plus(b.times(start)).plus(c);
+  const scale = D.max(f0.scale, f1.scale, fm.scale, fs.scale);
+  const tolerance = zeroTolerance(D).times(1e6).times(scale.isZero() ? 1 : scale);
+  if (predicted.minus(fs.value).abs().gt(tolerance)) return undefined;
+  let roots: Decimal[];
+  if (a.abs().lte(tolerance)) {
+    if (b.abs().lte(tolerance)) return c.abs().lte(tolerance) ? point : null;
+    roots = [c.neg().div(b)];
+  } else {
+    const disc = b.times(b).minus(a.times(c).times(4));
+    if (disc.isNegative()) return null;
+    const root = disc.sqrt();
+    roots = [b.neg().plus(root).div(a.times(2)), b.neg().minus(root).div(a.times(2))];
+  }
+  roots.sort((x, y) => x.minus(start).abs().cmp(y.minus(start).abs()));
+  for (const x of roots) {
+    const solved: Point = { ...point, [variable]: x };
+    try {
+      if (relativeSize(residual(D, lhs, rhs, solved)).lte(zeroTolerance(D))) return solved;
+    } catch {
+      /* the other root, or Newton */
+    }
+  }
+  return undefined;
+}
+
+/** Newton's method in float64 from a few starts: cheap, and close enough that two or three decimal steps finish the root. */
+function floatNewton(lhs: Expr, rhs: Expr, derivative: Expr, variable: string, point: Point, start: number): number | null {
+  const values: Record<string, number> = {};
+  for (const [k, v] of Object.entries(point)) values[k] = v.toNumber();
+  for (const x0 of [start, -start, 3 * start, start / 3]) {
+    let x = x0;
+    for (let i = 0; i < 60; i += 1) {
+      values[variable] = x;
+      let f: number;
+      let df: number;
+      try {
+        f = evaluateFloat(lhs, { values }) - evaluateFloat(rhs, { values });
+        df = evaluateFloat(derivative, { values });
+      } catch {
+        break;
+      }
+      if (!Number.isFinite(f) || !Number.isFinite(df) || df === 0) break;
+      const dx = f / df;
+      const limit = 4 * (Math.abs(x) + 1);
+      x -= Math.abs(dx) > limit ? Math.sign(dx) * limit : dx;
+      if (Math.abs(dx) <= 1e-13 * (Math.abs(x) + 1e-300)) return x;
     }
   }
   return null;
