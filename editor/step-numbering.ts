@@ -37,7 +37,12 @@ function buildDecorations(doc: PMNode, numbers: ReadonlyMap<string, number>): De
   doc.descendants((node, pos) => {
     if (node.type.name === "step") {
       const stepNumber = numbers.get(node.attrs.id) ?? null;
-      decorations.push(Decoration.node(pos, pos + node.nodeSize, { "data-step-number": String(stepNumber ?? "") }, { stepNumber }));
+      // Strings and numbers only: node views re-render when a spec value changes (shallow compare).
+      const citedNumbers = ((node.attrs.cites ?? []) as string[]).map((id) => numbers.get(id) ?? "?").join(" ");
+      const followsNumber = node.attrs.follows ? (numbers.get(node.attrs.follows) ?? null) : null;
+      decorations.push(
+        Decoration.node(pos, pos + node.nodeSize, { "data-step-number": String(stepNumber ?? "") }, { stepNumber, citedNumbers, followsNumber }),
+      );
       return false;
     }
     if (node.type.name === "stepRef") {
@@ -83,6 +88,22 @@ export const StepNumbering = Extension.create({
     ];
   },
 });
+
+export interface StepNumberSpec {
+  readonly stepNumber: number | null;
+  /** Current numbers of the cited steps, space-separated, "?" for a removed one. */
+  readonly citedNumbers: string;
+  readonly followsNumber: number | null;
+}
+
+/** Reads a step's numbering spec inside its node view. */
+export function stepNumberingFromDecorations(decorations: readonly { spec: unknown }[]): StepNumberSpec {
+  for (const decoration of decorations) {
+    const spec = decoration.spec as Partial<StepNumberSpec> | undefined;
+    if (spec && "citedNumbers" in spec) return { stepNumber: spec.stepNumber ?? null, citedNumbers: spec.citedNumbers ?? "", followsNumber: spec.followsNumber ?? null };
+  }
+  return { stepNumber: null, citedNumbers: "", followsNumber: null };
+}
 
 /** Reads the decoration spec's step number inside a node view (null when the step is gone). */
 export function stepNumberFromDecorations(decorations: readonly { spec: unknown }[]): number | null {

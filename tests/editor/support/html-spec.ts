@@ -40,7 +40,8 @@ export function parseOuter(element: FakeElement): { type: string; attrs: Record<
       if (!match[2] && element.getAttribute("data-type")) continue;
       const attrs = rule.getAttrs ? rule.getAttrs(element as unknown as HTMLElement) : {};
       if (attrs === false) continue;
-      return { type: type.name, attrs: { ...type.defaultAttrs, ...(attrs ?? {}) } };
+      const defaults = Object.fromEntries(Object.entries(type.spec.attrs ?? {}).map(([key, spec]) => [key, spec.default]));
+      return { type: type.name, attrs: { ...defaults, ...(attrs ?? {}) } };
     }
   }
   return null;

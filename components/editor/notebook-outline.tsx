@@ -1,0 +1,48 @@
+"use client";
+
+import type { Editor } from "@tiptap/core";
+import type { OutlineEntry } from "@/editor/outline";
+import { VerdictShape } from "./verdict-mark";
+
+const verdictTone: Record<string, string> = { verified: "text-accent", refuted: "text-alarm", undecided: "text-[#7a5a12]" };
+
+/** Moves the caret to a block and scrolls it into the middle of the view. */
+export function jumpTo(editor: Editor, pos: number): void {
+  editor.chain().setTextSelection(pos + 1).scrollIntoView().run();
+  const dom = editor.view.nodeDOM(pos);
+  if (dom instanceof HTMLElement) dom.scrollIntoView({ block: "center", behavior: "smooth" });
+  editor.commands.focus();
+}
+
+/** Sections, spacetime blocks and steps of the notebook, each a link that jumps there. */
+export function NotebookOutline({ editor, entries }: { editor: Editor; entries: readonly OutlineEntry[] }) {
+  if (!entries.length) return <p className="font-sans text-sm text-ink-muted">Headings and steps will be listed here.</p>;
+  return (
+    <ol className="space-y-0.5 font-sans text-sm">
+      {entries.map((entry) => (
+        <li key={`${entry.kind}-${entry.pos}`}>
+          <button
+            type="button"
+            onClick={() => jumpTo(editor, entry.pos)}
+            className={`flex w-full items-center gap-1.5 rounded px-1.5 py-0.5 text-left hover:bg-paper-deep ${
+              entry.kind === "section" ? (entry.level === 2 ? "mt-2 font-semibold text-ink" : "mt-1 pl-3 font-medium text-ink-soft") : "pl-4 text-ink-soft"
+            }`}
+          >
+            {entry.kind === "step" ? (
+              <>
+                <VerdictShape word={entry.verdict} className={verdictTone[entry.verdict] ?? "text-ink-muted"} />
+                <span className="tabular-nums">({entry.number})</span>
+                <span className="sr-only">{entry.verdict}</span>
+                <span className="truncate font-mono text-xs text-ink-muted">{entry.relation.slice(0, 40)}</span>
+              </>
+            ) : entry.kind === "spacetime" ? (
+              <span className="text-accent">◆ {entry.name || "Spacetime block"}</span>
+            ) : (
+              <span className="truncate">{entry.text || "Untitled section"}</span>
+            )}
+          </button>
+        </li>
+      ))}
+    </ol>
+  );
+}
