@@ -29,10 +29,16 @@ export async function getStoredNotebookDocument({ db, notebookId }: { db: Db; no
   return { groupId: row.groupId, snapshot: row.ydoc, compactedThrough: row.through, updates, content: row.content };
 }
 
-/** Appends one accepted Yjs update; resolves once it is stored (before anyone is told of it). */
-export async function appendNotebookUpdate({ db, notebookId, data, userId }: { db: Db; notebookId: string; data: Uint8Array; userId: string | null }): Promise<number> {
-  const [row] = await db.insert(notebookUpdates).values({ notebookId, data, userId }).returning({ id: notebookUpdates.id });
-  return row.id;
+/**
+ * Appends accepted Yjs updates in one statement, in order; resolves with the id of the last
+ * once they are stored (before anyone is told of them).
+ */
+export async function appendNotebookUpdates({ db, notebookId, updates }: { db: Db; notebookId: string; updates: readonly { data: Uint8Array; userId: string | null }[] }): Promise<number> {
+  const rows = await db
+    .insert(notebookUpdates)
+    .values(updates.map(({ data, userId }) => ({ notebookId, data, userId })))
+    .returning({ id: notebookUpdates.id });
+  return Math.max(...rows.map((row) => row.id));
 }
 
 /**

@@ -2,7 +2,7 @@ import "server-only";
 import * as Y from "yjs";
 import * as awarenessProtocol from "y-protocols/awareness";
 import type { Db } from "@/db/client";
-import { appendNotebookUpdate, compactNotebookDocument, getStoredNotebookDocument } from "@/db/queries/notebook-updates";
+import { appendNotebookUpdates, compactNotebookDocument, getStoredNotebookDocument } from "@/db/queries/notebook-updates";
 import { decodeClientMessage, encodeAwareness, encodeSyncStep1, encodeSyncStep2, encodeUpdate } from "./protocol";
 import type { JsonDocumentCodec } from "./json-codec";
 
@@ -46,6 +46,8 @@ export class NotebookRoom {
   private lastStoredId = 0;
   private compactedThrough = 0;
   private idleTimer: NodeJS.Timeout | undefined;
+  /** Updates received but not yet stored; stored together in one write (group commit). */
+  private pending: { update: Uint8Array; peer: Peer }[] = [];
   readonly ready: Promise<void>;
 
   constructor(private readonly options: RoomOptions) {
@@ -112,11 +114,8 @@ export class NotebookRoom {
         if (peer.access !== "write") return; // read-only: refused here, not just hidden in the UI
         // Refuse bytes that are not a Yjs update before they reach the log.
         Y.decodeUpdate(message.update);
-        await this.enqueue(async () => {
-          this.lastStoredId = await appendNotebookUpdate({ db: this.options.db, notebookId: this.options.notebookId, data: message.update, userId: peer.userId });
-          Y.applyUpdate(this.doc, message.update, peer);
-          await this.maybeCompact();
-        });
+        this.pending.push({ update: message.update, peer });
+        if (this.pending.length === 1) void this.enqueue(() => this.storePending());
         return;
       case "awareness":
         awarenessProtocol.applyAwarenessUpdate(this.awareness, message.update, peer);
@@ -125,6 +124,27 @@ export class NotebookRoom {
         peer.send(encodeAwareness(awarenessProtocol.encodeAwarenessUpdate(this.awareness, [...this.awareness.getStates().keys()])));
         return;
     }
+  }
+
+  /** Stores every pending update in one statement, then applies and broadcasts them. */
+  private async storePending(): Promise<void> {
+    const batch = this.pending;
+    this.pending = [];
+    if (batch.length === 0) return;
+    try {
+      this.lastStoredId = await appendNotebookUpdates({
+        db: this.options.db,
+        notebookId: this.options.notebookId,
+        updates: batch.map(({ update, peer }) => ({ data: update, userId: peer.userId })),
+      });
+    } catch (error) {
+      // Nothing of the batch was applied or shown to anyone; the writers reconnect and
+      // their sync sends the same changes again.
+      for (const peer of new Set(batch.map((b) => b.peer))) peer.close(1011, "could not store the change; reconnecting");
+      throw error;
+    }
+    for (const { update, peer } of batch) Y.applyUpdate(this.doc, update, peer);
+    await this.maybeCompact();
   }
 
   /** Waits until every update received so far is stored. */
