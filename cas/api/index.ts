@@ -42,6 +42,21 @@ export function describeIssues(error: z.ZodError): string {
 }
 
 /**
+ * Checks that a verb exists and its input has the right shape, without running
+ * it: the refusal, or null when the input is fine.
+ *
+ * @example
+ * validateVerbInput("check", { to: 3 }) // { code: "malformed", message: "context: …" }
+ */
+export function validateVerbInput(name: string, input: unknown): CheckError["error"] | null {
+  if (!isVerb(name)) return { code: "unknown_verb", message: `no cas verb named "${name}"; known: ${Object.keys(VERBS).join(", ")}` };
+  const parsed = VERBS[name].schema.safeParse(input);
+  if (parsed.success) return null;
+  const tooBig = parsed.error.issues.some((i) => i.code === "too_big");
+  return { code: tooBig ? "too_large" : "malformed", message: describeIssues(parsed.error) };
+}
+
+/**
  * Validates and runs one verb. Never throws: a malformed request, unreadable
  * LaTeX or an internal failure comes back as `{ ok: false, error }`. Internal
  * failures are logged, and only a generic message is returned.
@@ -50,12 +65,10 @@ export function describeIssues(error: z.ZodError): string {
  * runVerb("dims", { context: { symbols: { r: "length" } }, relation: "r = r" }) // { ok: true, value: { consistent: true, … } }
  */
 export function runVerb(name: string, input: unknown): VerbOutcome {
-  if (!isVerb(name)) return { ok: false, error: { code: "unknown_verb", message: `no cas verb named "${name}"; known: ${Object.keys(VERBS).join(", ")}` } };
+  const invalid = validateVerbInput(name, input);
+  if (invalid) return { ok: false, error: invalid };
   const parsed = VERBS[name].schema.safeParse(input);
-  if (!parsed.success) {
-    const tooBig = parsed.error.issues.some((i) => i.code === "too_big");
-    return { ok: false, error: { code: tooBig ? "too_large" : "malformed", message: describeIssues(parsed.error) } };
-  }
+  if (!parsed.success) return { ok: false, error: { code: "malformed", message: describeIssues(parsed.error) } };
   try {
     return { ok: true, value: VERBS[name].handle(parsed.data) };
   } catch (err) {
