@@ -30,8 +30,9 @@ export async function authorizeWithPassword(
   const parsed = credentialsSchema.safeParse(raw ?? {});
   if (!parsed.success) return null;
   const email = normalizeEmail(parsed.data.email);
+  const ip = clientIp(headers);
   try {
-    await checkSignInAllowed({ ip: clientIp(headers), email });
+    await checkSignInAllowed({ ip, email });
   } catch (error) {
     if (error instanceof AppError) throw new Error(error.message);
     throw error;
@@ -39,7 +40,7 @@ export async function authorizeWithPassword(
   const user = await getUserByEmail({ db: await getDb(), email });
   const matches = await verifyPassword(parsed.data.password, user?.passwordHash);
   if (!user || !matches) {
-    await recordSignInFailure({ email });
+    await recordSignInFailure({ ip, email });
     return null;
   }
   await recordSignInSuccess({ email });

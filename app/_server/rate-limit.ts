@@ -9,13 +9,13 @@ const store = globalThis as unknown as Record<symbol, Limiters | undefined>;
 
 function limiters(): Limiters {
   return (store[key] ??= {
-    // Any sign-in attempt from one address: 30 per 15 minutes.
+    // Failed sign-ins from one network address: 30 per 15 minutes (many accounts, one guesser).
     signInByIp: new RateLimiterMemory({ keyPrefix: "sign-in-ip", points: 30, duration: 15 * 60 }),
     // Failed passwords for one account: 5, then 15 minutes' pause. Keyed by the typed
     // address whether or not it exists, so the pause reveals nothing.
     signInByAccount: new RateLimiterMemory({ keyPrefix: "sign-in-account", points: 5, duration: 15 * 60, blockDuration: 15 * 60 }),
-    // Mails we send on request (sign-up, password reset): 10 per hour per address.
-    mailByIp: new RateLimiterMemory({ keyPrefix: "mail-ip", points: 10, duration: 60 * 60 }),
+    // Mails we send on request (sign-up, password reset): 20 per hour per network address.
+    mailByIp: new RateLimiterMemory({ keyPrefix: "mail-ip", points: 20, duration: 60 * 60 }),
   });
 }
 
@@ -25,23 +25,26 @@ function isRejection(error: unknown): error is RateLimiterRes {
   return error instanceof RateLimiterRes;
 }
 
-/** Counts a sign-in attempt; throws rate_limited when the address or the account is paused. */
-export async function checkSignInAllowed({ ip, email }: { ip: string; email: string }): Promise<void> {
-  const { signInByIp, signInByAccount } = limiters();
-  const account = await signInByAccount.get(email);
-  if (account && account.remainingPoints <= 0) throw new AppError("rate_limited:sign-in", pauseMessage);
-  try {
-    await signInByIp.consume(ip);
-  } catch (error) {
-    if (isRejection(error)) throw new AppError("rate_limited:sign-in", pauseMessage);
-    throw error;
-  }
+function exhausted(res: RateLimiterRes | null): boolean {
+  return res !== null && res.remainingPoints <= 0;
 }
 
-export async function recordSignInFailure({ email }: { email: string }): Promise<void> {
-  await limiters().signInByAccount.consume(email).catch((error: unknown) => {
+/**
+ * Throws rate_limited when the network address or the account has used up its failures.
+ * Only failures count, so a class of students signing in behind one address is not paused.
+ */
+export async function checkSignInAllowed({ ip, email }: { ip: string; email: string }): Promise<void> {
+  const { signInByIp, signInByAccount } = limiters();
+  const [byIp, byAccount] = await Promise.all([signInByIp.get(ip), signInByAccount.get(email)]);
+  if (exhausted(byIp) || exhausted(byAccount)) throw new AppError("rate_limited:sign-in", pauseMessage);
+}
+
+export async function recordSignInFailure({ ip, email }: { ip: string; email: string }): Promise<void> {
+  const { signInByIp, signInByAccount } = limiters();
+  const ignoreRejection = (error: unknown) => {
     if (!isRejection(error)) throw error;
-  });
+  };
+  await Promise.all([signInByIp.consume(ip).catch(ignoreRejection), signInByAccount.consume(email).catch(ignoreRejection)]);
 }
 
 export async function recordSignInSuccess({ email }: { email: string }): Promise<void> {
