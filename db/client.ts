@@ -20,7 +20,7 @@ export interface DbHandle {
 }
 
 /** Reads the environment: DATABASE_URL wins; otherwise PGlite under DATA_DIR (default ./.data). */
-export function configFromEnv(env: NodeJS.ProcessEnv = process.env): DbConfig {
+export function configFromEnv(env: Record<string, string | undefined> = process.env): DbConfig {
   if (env.DATABASE_URL) return { kind: "postgres", url: env.DATABASE_URL };
   return { kind: "pglite", dataDir: env.DATA_DIR || "./.data" };
 }

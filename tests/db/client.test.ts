@@ -27,9 +27,10 @@ for (const variant of variants) {
 
     it("reports its kind and has every table after migrating", async () => {
       expect(handle.kind).toBe(variant.name);
-      const result = await handle.db.execute<{ table_name: string }>(
+      // Both drivers answer raw SQL with { rows }.
+      const result = (await handle.db.execute(
         sql`select table_name from information_schema.tables where table_schema = 'public' order by table_name`,
-      );
+      )) as unknown as { rows: { table_name: string }[] };
       const names = result.rows.map((row) => row.table_name);
       for (const table of ["users", "groups", "memberships", "notebooks", "audit_log", "verification_tokens", "editions", "remarks", "checkpoints", "attachments", "mail_messages", "notebook_updates"]) {
         expect(names).toContain(table);

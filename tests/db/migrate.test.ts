@@ -26,12 +26,12 @@ for (const variant of variants) {
       await expect(handle.db.execute(sql`update editions set title = 'changed' where id = ${editionId}`)).rejects.toThrow();
       await expect(handle.db.execute(sql`delete from editions where id = ${editionId}`)).rejects.toThrow();
       await expect(handle.db.execute(sql`truncate editions`)).rejects.toThrow();
-      const rows = await handle.db.execute<{ title: string }>(sql`select title from editions where id = ${editionId}`);
+      const rows = (await handle.db.execute(sql`select title from editions where id = ${editionId}`)) as unknown as { rows: { title: string }[] };
       expect(rows.rows).toEqual([{ title: "Frozen" }]);
     });
 
     it("records each applied migration once", async () => {
-      const applied = await handle.db.execute<{ n: number }>(sql`select count(*)::int as n from drizzle.__drizzle_migrations`);
+      const applied = (await handle.db.execute(sql`select count(*)::int as n from drizzle.__drizzle_migrations`)) as unknown as { rows: { n: number }[] };
       expect(applied.rows[0].n).toBe(2);
     });
   });
