@@ -49,7 +49,8 @@ export function parseDimension(text: string): Dimension {
   if (named) return named;
   if (t === "1" || t === "") return DIMENSIONLESS;
   const out = { M: 0, L: 0, T: 0 };
-  const [numerator, denominator, extra] = t.split("/");
+  // A "/" inside braces is a fractional exponent (L^{1/2}); outside it starts the denominator.
+  const [numerator, denominator, extra] = t.split(/\/(?![^{]*\})/);
   if (extra !== undefined) throw new DimensionSyntaxError(`"${text}": at most one "/" in a dimension`);
   const read = (part: string, sign: number) => {
     for (const token of part.split(/[\s*·]+/).filter(Boolean)) {
