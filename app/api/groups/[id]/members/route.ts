@@ -8,6 +8,7 @@
 import { getDb } from "@/db/client";
 import { addMember, listMembers } from "@/db/queries/members";
 import { getUserByEmail } from "@/db/queries/users";
+import { announceMembershipChange } from "@/app/_server/collab/membership-events";
 import { AppError, handleRoute } from "@/app/_server/errors";
 import { findGroup } from "@/app/_server/group-lookup";
 import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
@@ -43,6 +44,7 @@ export const POST = handleRoute<Params>(async (request, { params }) => {
   }
   const membership = await addMember({ db, groupId: group.id, userId: account.id, role: body.role });
   if (!membership) throw new AppError("conflict:membership", "That person is already a member; change their role instead.");
+  announceMembershipChange({ groupId: group.id, userId: account.id });
   await auditChange({
     db,
     actor,

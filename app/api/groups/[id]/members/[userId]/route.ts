@@ -4,6 +4,7 @@
 //   → 404 not_found:group | not_found:member, 400 bad_request:*, 401 unauthorized:session, 403 forbidden:group
 import { getDb } from "@/db/client";
 import { changeMember, listMembers, type MemberChange } from "@/db/queries/members";
+import { announceMembershipChange } from "@/app/_server/collab/membership-events";
 import { AppError, handleRoute } from "@/app/_server/errors";
 import { findGroup } from "@/app/_server/group-lookup";
 import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
@@ -30,6 +31,8 @@ export const PATCH = handleRoute<Params>(async (request, { params }) => {
   await authorize({ db, actor, action: "group:manage-members", resource: { type: "group", groupId: group.id }, request });
   const change = await changeMember({ db, groupId: group.id, userId, role });
   failIfRefused(change);
+  // Open co-editing sockets re-check this person's role at once.
+  announceMembershipChange({ groupId: group.id, userId });
   await auditChange({ db, actor, action: "group:change-role", resourceType: "group", resourceId: group.id, detail: { userId, role }, request });
   const member = (await listMembers({ db, groupId: group.id })).find((m) => m.userId === userId);
   return Response.json({ member });
@@ -43,6 +46,7 @@ export const DELETE = handleRoute<Params>(async (request, { params }) => {
   const actor = await loadActor({ db, user });
   await authorize({ db, actor, action: "group:manage-members", resource: { type: "group", groupId: group.id }, request });
   failIfRefused(await changeMember({ db, groupId: group.id, userId, role: null }));
+  announceMembershipChange({ groupId: group.id, userId });
   await auditChange({ db, actor, action: "group:remove-member", resourceType: "group", resourceId: group.id, detail: { userId }, request });
   return Response.json({ ok: true });
 });
