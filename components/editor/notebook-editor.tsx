@@ -26,7 +26,17 @@ const EMPTY_NOTEBOOK: JSONContent = { type: "doc", content: [{ type: "paragraph"
 
 function withViews() {
   return notebookExtensions({
-    step: Step.extend({ addNodeView: () => ReactNodeViewRenderer(StepView) }),
+    step: Step.extend({
+      addNodeView: () =>
+        ReactNodeViewRenderer(StepView, {
+          // The default re-renders only when the node changes; numbers and verdicts arrive as decorations.
+          update: ({ oldNode, newNode, updateProps }) => {
+            if (newNode.type !== oldNode.type) return false;
+            updateProps();
+            return true;
+          },
+        }),
+    }),
     spacetimeBlock: SpacetimeBlock.extend({ addNodeView: () => ReactNodeViewRenderer(SpacetimeBlockView) }),
   });
 }
@@ -90,7 +100,7 @@ export function NotebookEditor({ notebookId, readOnly, initialContent, title }: 
 
   return (
     <div className="grid gap-6 lg:grid-cols-[12rem_minmax(0,1fr)]">
-      <nav aria-label="Outline" className="order-2 lg:order-1 lg:sticky lg:top-4 lg:max-h-[calc(100vh-2rem)] lg:self-start lg:overflow-y-auto">
+      <nav aria-label="Outline" className="lg:sticky lg:top-4 lg:max-h-[calc(100vh-2rem)] lg:self-start lg:overflow-y-auto">
         <details className="lg:hidden">
           <summary className="cursor-pointer font-sans text-sm font-medium text-ink-soft">Outline</summary>
           <div className="mt-2">
@@ -103,7 +113,7 @@ export function NotebookEditor({ notebookId, readOnly, initialContent, title }: 
         </div>
       </nav>
 
-      <div className="order-1 min-w-0 lg:order-2">
+      <div className="min-w-0">
         <div className="sticky top-0 z-10 -mx-2 mb-4 space-y-2 border-b border-paper-edge bg-paper/95 px-2 py-2 backdrop-blur">
           <div className="flex flex-wrap items-center justify-between gap-2">
             <VerdictSummary

@@ -8,10 +8,9 @@ const verdictTone: Record<string, string> = { verified: "text-accent", refuted: 
 
 /** Moves the caret to a block and scrolls it into the middle of the view. */
 export function jumpTo(editor: Editor, pos: number): void {
-  editor.chain().setTextSelection(pos + 1).scrollIntoView().run();
+  editor.chain().setTextSelection(pos + 1).focus(undefined, { scrollIntoView: false }).run();
   const dom = editor.view.nodeDOM(pos);
-  if (dom instanceof HTMLElement) dom.scrollIntoView({ block: "center", behavior: "smooth" });
-  editor.commands.focus();
+  if (dom instanceof HTMLElement) dom.scrollIntoView({ block: "center" });
 }
 
 /** Sections, spacetime blocks and steps of the notebook, each a link that jumps there. */

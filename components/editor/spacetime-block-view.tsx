@@ -125,7 +125,7 @@ export function SpacetimeBlockView({ node, editor, updateAttributes, selected }:
         <div className="mt-2 overflow-x-auto">
           {attrs.lineElement ? <Latex source={attrs.lineElement} display /> : <p className="font-sans text-sm italic text-ink-muted">No line element yet.</p>}
         </div>
-        <div className="grid gap-x-6 md:grid-cols-2">
+        <div className="grid items-start gap-x-6 md:grid-cols-2">
           <SymbolTable caption="Coordinates" symbols={attrs.coordinates} />
           <SymbolTable caption="Constants" symbols={attrs.constants} />
         </div>

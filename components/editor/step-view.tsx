@@ -61,9 +61,8 @@ export function StepView({ node, decorations, editor, updateAttributes }: ReactN
     else updateAttributes({ follows: earlier[0] ?? null });
   };
 
-  const justificationText = [
-    KIND_LABEL[kind],
-    node.attrs.detail ? ` ${node.attrs.detail}` : "",
+  const detailHtml = useMemo(() => (node.attrs.detail ? renderLatex(node.attrs.detail, false).html : null), [node.attrs.detail]);
+  const justificationTail = [
     numbering.citedNumbers ? ` using ${citationList(numbering.citedNumbers)}` : "",
     numbering.followsNumber ? ` from (${numbering.followsNumber})` : "",
   ].join("");
@@ -159,7 +158,16 @@ export function StepView({ node, decorations, editor, updateAttributes }: ReactN
               {citeProblem ? <span className="text-alarm">{citeProblem}</span> : null}
             </div>
           ) : (
-            <p className="italic">by {justificationText}</p>
+            <p className="italic">
+              by {KIND_LABEL[kind]}
+              {detailHtml ? (
+                <>
+                  {" "}
+                  <span className="not-italic" dangerouslySetInnerHTML={{ __html: detailHtml }} />
+                </>
+              ) : null}
+              {justificationTail}
+            </p>
           )}
         </div>
       </div>

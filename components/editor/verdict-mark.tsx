@@ -118,7 +118,8 @@ function headline(verdict: StepVerdict | null): string {
 export function VerdictMark({ verdict, stepNumber }: { verdict: StepVerdict | null; stepNumber: number | null }) {
   const word = verdictWord(verdict ?? undefined);
   const answer = verdict?.state === "answered" ? verdict.answer : null;
-  const numeric = answer?.method.kind === "numeric";
+  // A numeric "verified" is evidence, not proof; a numeric "refuted" comes with its witness.
+  const numeric = answer?.method.kind === "numeric" && answer.verdict === "verified";
   const line = headline(verdict);
   return (
     <div className={`text-sm leading-snug ${tone[word]}`} role="status" aria-live="polite">
