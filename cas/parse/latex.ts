@@ -68,6 +68,8 @@ class LatexReader {
   private depth = 0;
   private absDepth = 0;
   private readonly lineElement: boolean;
+  /** Longest letter run a declared name can match; bounds the search in {@link letters}. */
+  private readonly longestDeclared: number;
 
   constructor(private readonly source: string, private readonly options: ResolvedOptions) {
     const stream = tokenizeLatex(source);
@@ -76,6 +78,7 @@ class LatexReader {
     this.bound = this.tokens.length - 1;
     if (this.bound === 0) fail("empty", "the source is empty", 0);
     this.lineElement = options.lineElement ?? this.startsLikeLineElement();
+    this.longestDeclared = Math.max(0, ...[...options.declared].map((n) => n.length));
   }
 
   // ---- token access -------------------------------------------------------
@@ -227,9 +230,9 @@ class LatexReader {
       default: return false;
     }
   }
+  /** Whether `t`, the current token, is followed by a digit (`.5`). */
   private peekIsDigitAfter(t: LatexToken): boolean {
-    const k = this.tokens.indexOf(t);
-    return k >= 0 && this.tokenAt(k + 1).kind === "digit";
+    return this.peek() === t && this.tokenAt(this.i + 1).kind === "digit";
   }
 
   private postfix(): Expr {
@@ -343,10 +346,13 @@ class LatexReader {
   /** A run of letters: declared multi-letter names first, else one letter (with its subscript). */
   private letters(): Expr {
     const start = this.i;
+    // Only the first few letters of a run can matter (declared names and function words are short),
+    // so the scan stops there: a long run then costs linear time, not quadratic.
+    const scanLimit = Math.min(this.bound, start + Math.max(this.longestDeclared, 6) + 1);
     let runEnd = start + 1;
-    while (runEnd < this.bound && this.tokens[runEnd].kind === "letter" && !this.tokens[runEnd].ws && !this.tokens[runEnd].thin) runEnd += 1;
+    while (runEnd < scanLimit && this.tokens[runEnd].kind === "letter" && !this.tokens[runEnd].ws && !this.tokens[runEnd].thin) runEnd += 1;
     const letterText = (from: number, to: number) => this.tokens.slice(from, to).map((t) => t.text).join("");
-    for (let k = runEnd - start; k >= 2; k -= 1) {
+    for (let k = Math.min(runEnd - start, this.longestDeclared); k >= 2; k -= 1) {
       const base = letterText(start, start + k);
       if (start + k === runEnd && this.isChar(this.tokenAt(runEnd), "_")) {
         const sub = this.subscriptAt(runEnd);
