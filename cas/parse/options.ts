@@ -1,4 +1,5 @@
 import { fail } from "./errors";
+import { LETTER_COMMANDS, SUBSCRIPT_COMMANDS } from "./latex-vocabulary";
 
 /**
  * What the notebook has declared, so the reader can prefer declared names over
@@ -51,6 +52,11 @@ const SUBSCRIPT_SIGNS: Readonly<Record<string, string>> = { "+": "plus", "-": "m
  * normaliseName("g_{\\theta\\theta}") // "g_thetatheta"
  */
 export function normaliseName(name: string): string {
+  for (const m of name.replace(WRAPPER, "").matchAll(/\\([A-Za-z]+)/g)) {
+    if (!LETTER_COMMANDS.has(m[1]) && !SUBSCRIPT_COMMANDS.has(m[1])) {
+      fail("bad_name", `cannot read the declared name "${name}": \\${m[1]} is not a letter`, 0);
+    }
+  }
   const plain = name
     .replace(WRAPPER, "")
     .replace(/[{}\s\\]/g, "")
