@@ -446,7 +446,7 @@ class LatexReader {
     if (first.kind === "close") fail("empty_group", `empty parentheses at ${open.pos}`, open.pos);
     const inner = this.expression();
     const close = this.closeFor(open);
-    if (close.sized && close.text === "|" && (this.isChar(this.peek(), "_") || this.isChar(this.peek(), "^"))) {
+    if (close.sized && close.text === "|" && this.isChar(this.peek(), "_")) {
       fail("unsupported", `an evaluation bar at ${close.pos} is not read: substitute the value instead`, close.pos);
     }
     return open.text === "|" ? call("abs", inner) : inner;

@@ -89,7 +89,9 @@ class LatexPrinter {
     factors.forEach((f, i) => {
       const last = i === factors.length - 1;
       const grouped = f.kind === "add" || f.kind === "neg" || f.kind === "mul" || isNegativeNum(f) || (f.kind === "limit" && !last);
-      const text = grouped ? paren(this.expr(f)) : this.expr(f);
+      let text = grouped ? paren(this.expr(f)) : this.expr(f);
+      // `2 \cdot 10^{3}` would read back as the literal 2e3: a group keeps the power apart.
+      if (i > 0 && factors[i - 1].kind === "num" && f.kind === "pow" && f.base.kind === "num") text = `{${text}}`;
       if (i > 0) out += this.separator(factors[i - 1], f, text);
       out += text;
     });
@@ -114,7 +116,8 @@ class LatexPrinter {
   private isBareCall(fn: string, args: readonly Expr[]): boolean {
     if (!BARE_FUNCTIONS[fn] || args.length !== 1) return false;
     const a = args[0];
-    return (a.kind === "sym" && a.name !== "d" && !(a.name === "e")) || (a.kind === "const" && a.name === "pi") || (a.kind === "num" && /^\d+(\.\d+)?$/.test(a.value));
+    const upright = a.kind === "sym" && latexName(a.name).startsWith("\\mathrm");
+    return (a.kind === "sym" && a.name !== "d" && a.name !== "e" && !upright) || (a.kind === "const" && a.name === "pi") || (a.kind === "num" && /^\d+(\.\d+)?$/.test(a.value));
   }
 
   private isSimpleExponent(e: Expr): boolean {
