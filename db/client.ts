@@ -34,7 +34,7 @@ async function openPglite(dataDir: string): Promise<DbHandle> {
   const { PGlite } = await import("@electric-sql/pglite");
   const { drizzle } = await import("drizzle-orm/pglite");
   const inMemory = dataDir.startsWith("memory://");
-  const location = inMemory ? dataDir : path.resolve(dataDir, "pglite");
+  const location = inMemory ? dataDir : path.resolve(/* turbopackIgnore: true */ dataDir, "pglite");
   if (!inMemory) mkdirSync(location, { recursive: true });
   const client = await PGlite.create(location);
   try {

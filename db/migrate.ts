@@ -5,7 +5,8 @@ import type { Pool } from "pg";
 
 /** Absolute path of drizzle/; MIGRATIONS_DIR overrides it for tools run from elsewhere. */
 export function migrationsFolder(): string {
-  return path.resolve(process.env.MIGRATIONS_DIR || path.join(process.cwd(), "drizzle"));
+  // Read at run time from the working directory; the bundler must not trace the project for it.
+  return path.resolve(/* turbopackIgnore: true */ process.env.MIGRATIONS_DIR || path.join(process.cwd(), "drizzle"));
 }
 
 export async function migratePglite(client: PGlite): Promise<void> {

@@ -9,7 +9,8 @@ import path from "node:path";
  */
 export function authSecret(): string {
   if (process.env.NEXTAUTH_SECRET) return process.env.NEXTAUTH_SECRET;
-  const file = path.resolve(process.env.DATA_DIR?.startsWith("memory://") ? "./.data" : process.env.DATA_DIR || "./.data", "nextauth-secret");
+  const dataDir = process.env.DATA_DIR?.startsWith("memory://") ? "./.data" : process.env.DATA_DIR || "./.data";
+  const file = path.resolve(/* turbopackIgnore: true */ dataDir, "nextauth-secret");
   try {
     return readFileSync(file, "utf8").trim();
   } catch {
