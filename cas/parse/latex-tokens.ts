@@ -29,6 +29,20 @@ const LEFT_DELIMS: Readonly<Record<string, string>> = { "(": "(", "[": "[", "|":
 const RIGHT_DELIMS: Readonly<Record<string, string>> = { ")": ")", "]": "]", "|": "|", ".": ".", "\\}": "}", "\\rbrace": "}", "\\rvert": "|", "\\vert": "|" };
 const ORDINARY_CHARS = "+-*/^_=<>,.'!:;";
 
+/**
+ * Unicode characters that pasted text carries, read as the command they stand
+ * for (the position stays that of the character). U+2212 is the typographic minus.
+ */
+const UNICODE_COMMANDS: Readonly<Record<string, string>> = {
+  "α": "alpha", "β": "beta", "γ": "gamma", "δ": "delta", "ε": "epsilon", "ζ": "zeta", "η": "eta", "θ": "theta",
+  "ϑ": "vartheta", "ι": "iota", "κ": "kappa", "λ": "lambda", "μ": "mu", "ν": "nu", "ξ": "xi", "π": "pi", "ρ": "rho",
+  "σ": "sigma", "τ": "tau", "υ": "upsilon", "φ": "phi", "ϕ": "phi", "χ": "chi", "ψ": "psi", "ω": "omega",
+  "Γ": "Gamma", "Δ": "Delta", "Θ": "Theta", "Λ": "Lambda", "Ξ": "Xi", "Π": "Pi", "Σ": "Sigma", "Φ": "Phi", "Ψ": "Psi", "Ω": "Omega",
+  "ℓ": "ell", "ℏ": "hbar", "∞": "infty", "∂": "partial", "·": "cdot", "⋅": "cdot", "×": "times",
+  "≤": "le", "≥": "ge", "≠": "neq", "≈": "approx", "±": "pm", "→": "to", "⊙": "odot",
+};
+const UNICODE_CHARS: Readonly<Record<string, string>> = { "−": "-", "–": "-" };
+
 const isLetter = (c: string) => (c >= "a" && c <= "z") || (c >= "A" && c <= "Z");
 const isDigit = (c: string) => c >= "0" && c <= "9";
 const isSpace = (c: string) => c === " " || c === "\t" || c === "\n" || c === "\r";
@@ -98,6 +112,8 @@ export function tokenizeLatex(source: string): TokenStream {
     else if (c === "~") thin = true;
     else if (c === "&" || c === "$") { /* alignment marks and math-mode dollars carry no meaning here */ }
     else if (ORDINARY_CHARS.includes(c)) push("char", c, i, i + 1);
+    else if (UNICODE_COMMANDS[c]) push("cmd", UNICODE_COMMANDS[c], i, i + 1);
+    else if (UNICODE_CHARS[c]) push("char", UNICODE_CHARS[c], i, i + 1);
     else fail("unexpected", `unexpected character '${c}' at ${i}`, i);
     i += 1;
   }

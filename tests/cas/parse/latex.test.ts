@@ -193,6 +193,16 @@ describe("readLatex derivatives, differentials and limits", () => {
   });
 });
 
+describe("readLatex on pasted Unicode", () => {
+  it("reads Greek letters, the typographic minus and relation signs as their commands", () => {
+    expect(readLatex("r ≥ 3M")).toEqual(readLatex("r \\ge 3M"));
+    expect(readLatexExpr("1 − 2M/r")).toEqual(readLatexExpr("1 - 2M/r"));
+    expect(readLatexExpr("sin θ".replace("sin", "\\sin"))).toEqual(readLatexExpr("\\sin\\theta"));
+    expect(readLatexExpr("Λ r² ".replace("²", "^2"))).toEqual(readLatexExpr("\\Lambda r^2"));
+    expect(readLatexExpr("2π r")).toEqual(readLatexExpr("2\\pi r"));
+  });
+});
+
 describe("readLatex relations and punctuation", () => {
   it("reads each relation sign", () => {
     const cases: [string, string][] = [["a = b", "="], ["a < b", "<"], ["a > b", ">"], ["a \\le b", "<="], ["a \\leq b", "<="], ["a \\ge b", ">="], ["a \\geq b", ">="], ["a \\neq b", "!="], ["a \\ne b", "!="]];
