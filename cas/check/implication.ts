@@ -36,7 +36,7 @@ export type ProbeOutcome =
   | { readonly verdict: "refuted"; readonly witness: Record<string, string>; readonly left: string; readonly right: string; readonly points: number; readonly digits: number }
   | { readonly verdict: "undecided"; readonly reason: string };
 
-interface Plan { variable: string; derivative: Expr }
+interface Plan { variable: string; derivative: Expr; degree: number | null }
 
 /** Which variable to solve each premise for: velocities and differentials first (they are free along a curve), then variables no condition bounds. */
 function candidateVariables(problem: ImplicationProblem): string[][] {
@@ -94,7 +94,8 @@ export function probeImplication(problem: ImplicationProblem, rng: RandomStream,
   for (let k = 0; k < alternatives; k += 1) {
     plans.push(problem.premises.map((p, i) => {
       const v = candidates[i][Math.min(k, candidates[i].length - 1)];
-      return { variable: v, derivative: differentiate(add(p.lhs, neg(p.rhs)), v) };
+      const difference = add(p.lhs, neg(p.rhs));
+      return { variable: v, derivative: differentiate(difference, v), degree: polynomialDegree(difference, v) };
     }));
   }
 
@@ -110,7 +111,7 @@ export function probeImplication(problem: ImplicationProblem, rng: RandomStream,
     if (!point) continue;
     for (let i = 0; i < problem.premises.length && point; i += 1) {
       const p = problem.premises[i];
-      point = solveFor(D, p.lhs, p.rhs, plans[plan][i].derivative, plans[plan][i].variable, point);
+      point = solveFor(D, p.lhs, p.rhs, plans[plan][i].derivative, plans[plan][i].variable, point, plans[plan][i].degree);
     }
     if (!point) {
       plan = (plan + 1) % plans.length;

@@ -12,11 +12,19 @@ import type { Point } from "./sample";
  * the point with the variable replaced, or null when no start converges (for
  * instance ṙ² = a negative number has no real root there).
  *
+ * `degree`, when the caller knows the relation is a polynomial of degree 1 or 2
+ * in the variable (see polynomialDegree), lets the root come from two or three
+ * evaluations instead of a probe of the shape.
+ *
  * @example
  * solveFor(D, parsePlain("x^2"), parsePlain("2"), parsePlain("2*x"), "x", { x: new D(1) }) // { x: 1.41421356… }
  */
-export function solveFor(D: DecimalContext, lhs: Expr, rhs: Expr, derivative: Expr, variable: string, point: Point): Point | null {
+export function solveFor(D: DecimalContext, lhs: Expr, rhs: Expr, derivative: Expr, variable: string, point: Point, degree: number | null = null): Point | null {
   const start = point[variable] ?? new D(1);
+  if (degree === 1 || degree === 2) {
+    const exact = solveKnownPolynomial(D, lhs, rhs, variable, point, start, degree);
+    if (exact !== undefined) return exact;
+  }
   const quadratic = solveQuadratic(D, lhs, rhs, variable, point, start);
   if (quadratic !== undefined) return quadratic;
   const rough = floatNewton(lhs, rhs, derivative, variable, point, start.toNumber());
@@ -124,4 +132,33 @@ function floatNewton(lhs: Expr, rhs: Expr, derivative: Expr, variable: string, p
     }
   }
   return null;
+}
+
+/** The root of a relation known to be linear or quadratic in the variable: coefficients from values at 0, 1 (and −1). */
+function solveKnownPolynomial(D: DecimalContext, lhs: Expr, rhs: Expr, variable: string, point: Point, start: Decimal, degree: 1 | 2): Point | null | undefined {
+  const at = (v: number) => residual(D, lhs, rhs, { ...point, [variable]: new D(v) });
+  try {
+    const f0 = at(0);
+    const f1 = at(1);
+    const scale = D.max(f0.scale, f1.scale);
+    const tiny = zeroTolerance(D).times(scale.isZero() ? 1 : scale);
+    if (degree === 1) {
+      const b = f1.value.minus(f0.value);
+      if (b.abs().lte(tiny)) return f0.value.abs().lte(tiny) ? point : null;
+      return { ...point, [variable]: f0.value.neg().div(b) };
+    }
+    const fm = at(-1);
+    const a = f1.value.plus(fm.value).div(2).minus(f0.value);
+    const b = f1.value.minus(fm.value).div(2);
+    const c = f0.value;
+    if (a.abs().lte(tiny)) return b.abs().lte(tiny) ? (c.abs().lte(tiny) ? point : null) : { ...point, [variable]: c.neg().div(b) };
+    const disc = b.times(b).minus(a.times(c).times(4));
+    if (disc.isNegative()) return null;
+    const root = disc.sqrt();
+    const roots = [b.neg().plus(root).div(a.times(2)), b.neg().minus(root).div(a.times(2))];
+    roots.sort((x, y) => x.minus(start).abs().cmp(y.minus(start).abs()));
+    return { ...point, [variable]: roots[0] };
+  } catch {
+    return undefined; // a value at 0 or ±1 is undefined there: fall back to the general path
+  }
 }
