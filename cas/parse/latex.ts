@@ -484,7 +484,7 @@ class LatexReader {
       case "dot": case "ddot": case "dddot": return this.dotted();
       case "lim": return this.limitOf();
       case "rm": return this.wrapped(this.next(), this.rmContent());
-      case "partial": return fail("unsupported", `\\partial at ${t.pos} is read only in \\frac{\\partial f}{\\partial r}`, t.pos);
+      case "partial": return this.partialIndex();
       default: break;
     }
     if (FUNCTION_COMMANDS[name]) { this.next(); return this.applyFunction(FUNCTION_COMMANDS[name], t); }
@@ -719,6 +719,24 @@ class LatexReader {
     const of = product(this.tight());
     this.leave();
     return limit(of, name.text, to);
+  }
+
+  /** `\partial_r f`: the partial derivative by the subscript, of the factor that follows. */
+  private partialIndex(): Expr {
+    const t = this.next();
+    if (!this.isChar(this.peek(), "_")) fail("unsupported", `\\partial at ${t.pos} is read as \\partial_r f or in \\frac{\\partial f}{\\partial r}`, t.pos);
+    const underscore = this.i;
+    const by = this.tokenAt(underscore + 1).kind === "lbrace"
+      ? this.symbolNameAt(underscore + 2)
+      : this.symbolNameAt(underscore + 1);
+    const close = this.tokenAt(underscore + 1).kind === "lbrace" ? this.partner.get(underscore + 1)! : -1;
+    if (!by || (close >= 0 && by.next !== close)) fail("bad_derivative", `\\partial at ${t.pos} needs one variable as its subscript`, t.pos);
+    this.i = close >= 0 ? close + 1 : by.next;
+    if (!this.startsFactor(this.peek())) fail("missing_argument", `\\partial_${by.text} at ${t.pos} needs something to act on`, t.pos);
+    this.enter(t.pos);
+    const of = this.postfix();
+    this.leave();
+    return deriv(of, by.text, 1, true);
   }
 
   // ---- fractions and Leibniz derivatives ------------------------------------

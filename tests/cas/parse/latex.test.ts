@@ -178,6 +178,12 @@ describe("readLatex derivatives, differentials and limits", () => {
     expect(readLatexExpr("\\frac{\\partial L}{\\partial \\dot{r}}")).toEqual(deriv(sym("L"), dotVariable("r", 1), 1, true));
   });
 
+  it("reads index-style partials \\partial_r f", () => {
+    expect(readLatexExpr("\\partial_r f")).toEqual(deriv(sym("f"), "r", 1, true));
+    expect(readLatexExpr("\\partial_{\\theta}\\partial_r g_{tt}")).toEqual(deriv(deriv(sym("g_tt"), "r", 1, true), "theta", 1, true));
+    expect(() => readLatexExpr("\\partial f")).toThrow(ReadError);
+  });
+
   it("reads d as a differential in a line element, as a factor elsewhere, and always after \\mathrm", () => {
     expect(readLatex("ds^2 = dt^2")).toEqual(relation(pow(differential("s"), num(2)), "=", pow(differential("t"), num(2))));
     expect(readLatexExpr("dt^2")).toEqual(mul(sym("d"), pow(sym("t"), num(2))));
