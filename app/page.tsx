@@ -78,7 +78,7 @@ export default async function LandingPage() {
         <dl className="mt-4 grid gap-x-8 gap-y-3 sm:grid-cols-2">
           {roles.map((role) => (
             <div key={role} className="flex gap-2">
-              <dt className="font-semibold capitalize">{roleLabels[role]}</dt>
+              <dt className="font-semibold first-letter:uppercase">{roleLabels[role]}</dt>
               <dd className="text-ink-soft">— {roleDescriptions[role]}</dd>
             </div>
           ))}

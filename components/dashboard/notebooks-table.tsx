@@ -151,7 +151,7 @@ export function NotebooksTable() {
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="border-b border-paper-edge last:border-b-0 hover:bg-paper-deep/60">
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-4 py-3 align-top">
+                  <td key={cell.id} className={`px-4 py-3 align-top ${cell.column.id === "title" ? "" : "whitespace-nowrap"}`}>
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}

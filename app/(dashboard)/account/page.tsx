@@ -3,7 +3,6 @@ import { redirect } from "next/navigation";
 import { getCurrentUser } from "@/app/_server/auth";
 import { AccountGroups } from "@/components/account/account-groups";
 import { RequestResetForm } from "@/components/auth/password-reset-forms";
-import { SignOutButton } from "@/components/sign-out-button";
 import { PageHeading } from "@/components/ui/page-heading";
 import { Panel } from "@/components/ui/panel";
 
@@ -27,9 +26,6 @@ export default async function AccountPage() {
               <dd className="font-medium">{user.email}</dd>
             </div>
           </dl>
-          <div className="mt-5">
-            <SignOutButton />
-          </div>
         </Panel>
         <Panel title="Your groups" id="account-groups-title">
           <AccountGroups />
