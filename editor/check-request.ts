@@ -68,8 +68,9 @@ export function blockContext(block: DerivationBlock | null, definitions: readonl
 /**
  * Plans the check of one step. `from` is the relation of the step it explicitly follows
  * (`follows`); otherwise of the first cited step — except for a substitution, whose cited
- * steps are what is substituted — and otherwise of the previous step. `to` is the step's
- * own relation; the context is the nearest spacetime block above plus the definitions made
+ * steps are what is substituted — otherwise of the previous non-definition step, and for
+ * the first derived step under a block, the block's line element. `to` is the step's own
+ * relation; the context is the nearest spacetime block above plus the definitions made
  * before it under that block.
  *
  * @example
@@ -95,13 +96,15 @@ export function planStepCheck(derivation: Derivation, stepId: string): StepCheck
 
   const follows = step.followsId ? byId.get(step.followsId) : undefined;
   const source = follows ?? (step.kind === "substitute" ? previous : (cited[0] ?? previous));
-  if (!source && step.kind !== "definition") {
-    return { notChecked: "First step under its spacetime block: nothing precedes it. Cite a step to check it against." };
+  // The first derived step under a block starts from the block's line element.
+  const from = source?.relation ?? (block?.lineElement.trim() || null);
+  if (from === null && step.kind !== "definition") {
+    return { notChecked: "Nothing precedes this step: no earlier step and no line element above. Cite a step to check it against." };
   }
   return {
     request: {
       context: blockContext(block, definitions),
-      from: source?.relation ?? step.relation,
+      from: from ?? step.relation,
       to: step.relation,
       justification,
     },

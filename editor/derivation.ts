@@ -25,7 +25,10 @@ export interface DerivationStep {
   readonly cites: readonly string[];
   /** The earlier step it explicitly follows from (`follows`), or null. */
   readonly followsId: string | null;
-  /** The step before it under the same spacetime block, or null for the first one. */
+  /**
+   * The nearest earlier step under the same spacetime block that is not a definition
+   * (definitions go into the context instead), or null when there is none.
+   */
   readonly previousId: string | null;
   /** Index into `blocks` of the nearest spacetime block above, or null when there is none. */
   readonly blockIndex: number | null;
@@ -69,9 +72,9 @@ function toBlock(attrs: Record<string, unknown>): DerivationBlock {
  * all read a notebook the same way.
  *
  * Rules: steps are numbered over the whole notebook; a step's context is the nearest
- * spacetime block above it; a step's `previousId` is the step before it under the same
- * block (a new block starts a new chain); citations and `follows` of unknown or later steps
- * are dropped.
+ * spacetime block above it; a step's `previousId` is the nearest earlier non-definition step
+ * under the same block (a new block starts a new chain); citations and `follows` of unknown
+ * or later steps are dropped.
  *
  * @example
  * const { steps } = extractDerivation(editor.getJSON());
@@ -113,7 +116,7 @@ export function extractDerivation(doc: JSONContent): Derivation {
         section,
       });
       seen.add(id);
-      previousId = id;
+      if (steps[steps.length - 1].kind !== "definition") previousId = id;
       return;
     }
     for (const child of node.content ?? []) visit(child);

@@ -26,6 +26,13 @@ export interface CheckSchedulerOptions {
   readonly cacheSize?: number;
 }
 
+/** Error codes that say nothing about the step (the engine was cold, busy or stopped): retried, never cached. */
+const TRANSIENT_ERRORS = new Set(["timeout", "aborted", "busy", "internal", "unavailable:checker"]);
+
+function isTransient(result: CheckAnswer | CheckError): boolean {
+  return isCheckError(result) && TRANSIENT_ERRORS.has(result.error.code);
+}
+
 type Slot = { key: string; controller?: AbortController; verdict?: StepVerdict };
 
 /**
@@ -42,7 +49,7 @@ export class CheckScheduler {
   private readonly options: Required<CheckSchedulerOptions>;
   private readonly slots = new Map<string, Slot>();
   private readonly cache = new Map<string, CheckAnswer | CheckError>();
-  private queue: Array<{ id: string; request: CheckRequest; key: string }> = [];
+  private queue: Array<{ id: string; request: CheckRequest; key: string; retried?: boolean }> = [];
   private running = 0;
   private timer: ReturnType<typeof setTimeout> | null = null;
   private disposed = false;
@@ -78,7 +85,8 @@ export class CheckScheduler {
     for (const [id, plan] of plans) {
       const key = "request" in plan ? JSON.stringify(plan.request) : `not-checked:${plan.notChecked}`;
       const slot = this.slots.get(id);
-      if (slot?.key === key) {
+      const failedBriefly = slot?.verdict?.state === "failed" && TRANSIENT_ERRORS.has(slot.verdict.error.code);
+      if (slot?.key === key && !failedBriefly) {
         if (slot.verdict && shown?.get(id)?.state === "pending") changed.push([id, slot.verdict]);
         continue;
       }
@@ -119,6 +127,7 @@ export class CheckScheduler {
   }
 
   private remember(key: string, result: CheckAnswer | CheckError): void {
+    if (isTransient(result)) return;
     this.cache.set(key, result);
     if (this.cache.size > this.options.cacheSize) this.cache.delete(this.cache.keys().next().value as string);
   }
@@ -146,6 +155,10 @@ export class CheckScheduler {
         .then((verdict) => {
           const current = this.slots.get(job.id);
           if (this.disposed || controller.signal.aborted || current?.key !== job.key) return; // stale
+          if (verdict.state === "failed" && TRANSIENT_ERRORS.has(verdict.error.code) && !job.retried) {
+            this.queue.push({ ...job, retried: true }); // once: a cold worker often times out on its first request
+            return;
+          }
           current.verdict = verdict;
           this.options.onVerdicts([[job.id, verdict]]);
         })

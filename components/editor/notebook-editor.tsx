@@ -5,7 +5,7 @@ import "./notebook-editor.css";
 
 import { getSchema, type JSONContent } from "@tiptap/core";
 import { EditorContent, ReactNodeViewRenderer, useEditor, useEditorState } from "@tiptap/react";
-import { useMemo } from "react";
+import { useEffect, useMemo, useState } from "react";
 import { notebookExtensions } from "@/editor/notebook-extensions";
 import { outlineOf } from "@/editor/outline";
 import { SpacetimeBlock } from "@/editor/spacetime-block";
@@ -16,7 +16,7 @@ import { NotebookOutline, jumpTo } from "./notebook-outline";
 import type { NotebookEditorLoaderProps } from "./notebook-editor-loader";
 import { SaveIndicator } from "./save-indicator";
 import { SpacetimeBlockView } from "./spacetime-block-view";
-import { createHttpStepChecker } from "./step-checker-client";
+import { createNotebookChecker, type NotebookChecker } from "./step-checker-client";
 import { StepView } from "./step-view";
 import { useAutosave } from "./use-autosave";
 import { useStepChecks } from "./use-step-checks";
@@ -59,7 +59,13 @@ function openContent(initial: unknown): { content: JSONContent; problem: string 
 export function NotebookEditor({ notebookId, readOnly, initialContent, title }: NotebookEditorLoaderProps) {
   const opened = useMemo(() => openContent(initialContent), [initialContent]);
   const locked = readOnly || opened.problem !== null;
-  const checker = useMemo(() => createHttpStepChecker(), []);
+  // Made in an effect (not a memo) so a remount under React's strict mode gets a live worker.
+  const [checker, setChecker] = useState<NotebookChecker | null>(null);
+  useEffect(() => {
+    const created = createNotebookChecker();
+    setChecker(created);
+    return () => created.dispose();
+  }, []);
   const extensions = useMemo(() => withViews(), []);
 
   const editor = useEditor({

@@ -1,6 +1,7 @@
 "use client";
 
 import type { CheckAnswer, CheckError, CheckRequest } from "@/cas/check/protocol";
+import { createBrowserChecker } from "@/cas/worker/browser-client";
 import type { StepChecker } from "@/editor/step-checker";
 
 function isCheckAnswer(value: unknown): value is CheckAnswer {
@@ -17,9 +18,9 @@ function asCheckError(value: unknown): CheckError | null {
 }
 
 /**
- * Checks steps through `POST /api/cas/check`. Stand-in until the CAS browser worker
- * (cas/worker/browser-client.ts) exists; it answers only what the server's checker says,
- * and reports an unreachable or unknown answer as an error, never as a verdict.
+ * Checks steps through `POST /api/cas/check`, for browsers that cannot run the checker's
+ * worker. It answers only what the server's checker says, and reports an unreachable or
+ * unknown answer as an error, never as a verdict.
  */
 export function createHttpStepChecker(endpoint = "/api/cas/check"): StepChecker {
   return {
@@ -38,4 +39,26 @@ export function createHttpStepChecker(endpoint = "/api/cas/check"): StepChecker 
       throw new Error(response.ok ? "The checker sent an answer the editor does not understand." : `The checker is unavailable (HTTP ${response.status}).`);
     },
   };
+}
+
+/** The checker the notebook uses, and how to let it go when the editor closes. */
+export interface NotebookChecker extends StepChecker {
+  /** Where checks run, for the status line: in this tab's worker, or on the server. */
+  readonly where: "worker" | "server";
+  dispose(): void;
+}
+
+/**
+ * Checks in a Web Worker in this tab (the CAS browser client), so typing is never blocked
+ * and the server is not asked for every keystroke; falls back to the HTTP route when the
+ * browser cannot start a module worker.
+ */
+export function createNotebookChecker(): NotebookChecker {
+  try {
+    const worker = createBrowserChecker();
+    return { where: "worker", check: (request, signal) => worker.check(request, signal), dispose: () => worker.dispose() };
+  } catch {
+    const http = createHttpStepChecker();
+    return { where: "server", check: http.check, dispose: () => {} };
+  }
 }

@@ -11,9 +11,9 @@ import { stepVerdictsKey } from "@/editor/step-verdicts";
  * Keeps the verdict margin in step with the document: every change (local or from a
  * co-author) re-plans the checks after a quiet period; answers land in the verdict plugin.
  */
-export function useStepChecks(editor: Editor | null, checker: StepChecker): void {
+export function useStepChecks(editor: Editor | null, checker: StepChecker | null): void {
   useEffect(() => {
-    if (!editor) return;
+    if (!editor || !checker) return;
     const scheduler = new CheckScheduler({
       checker,
       onVerdicts: (entries) => {

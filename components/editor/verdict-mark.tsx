@@ -79,8 +79,22 @@ function WitnessList({ witness }: { witness: Readonly<Record<string, string>> })
   );
 }
 
+/** A report with a term of unknown dimension cannot say the terms disagree, only that it is incomplete. */
+export function dimensionsDisagree(report: DimensionReport): boolean {
+  if (report.consistent) return false;
+  return report.odd !== undefined || report.terms.every((term) => term.dimension !== null);
+}
+
 function DimensionNote({ report }: { report: DimensionReport }) {
   if (report.consistent) return <p className="mt-1">Dimension audit: every term agrees.</p>;
+  if (!dimensionsDisagree(report)) {
+    const unknown = report.terms.filter((term) => term.dimension === null).map((term) => term.latex);
+    return (
+      <p className="mt-1">
+        Dimension audit incomplete: no declared dimension for <code className="font-mono">{unknown.join(", ")}</code>. Declare the symbols in the spacetime block to audit them.
+      </p>
+    );
+  }
   const odd = report.odd !== undefined ? report.terms[report.odd] : undefined;
   return (
     <div className="mt-1">
@@ -147,7 +161,7 @@ export function VerdictMark({ verdict, stepNumber }: { verdict: StepVerdict | nu
           </div>
         </details>
       )}
-      {answer?.dimensions && !answer.dimensions.consistent ? (
+      {answer?.dimensions && dimensionsDisagree(answer.dimensions) ? (
         <p className="mt-0.5 font-sans text-xs text-alarm">
           <span aria-hidden="true">⚠ </span>dimensions disagree
         </p>

@@ -92,9 +92,15 @@ describe("planStepCheck", () => {
     });
   });
 
-  it("does not check an empty step, or a first step that has nothing to follow from", () => {
+  it("starts the first derived step under a block from the block's line element, skipping definitions", () => {
+    const plan = planStepCheck(derivation, "st-1");
+    expect("request" in plan && plan.request.from).toBe("ds^2 = …");
+  });
+
+  it("does not check an empty step, or a first step with neither a previous step nor a line element", () => {
     expect(planStepCheck(derivation, "st-5")).toHaveProperty("notChecked");
-    const lone = extractDerivation(doc(schwarzschild, step("st-x", "a = b")));
+    const bare = { ...schwarzschild, attrs: { ...schwarzschild.attrs, lineElement: "" } };
+    const lone = extractDerivation(doc(bare, step("st-x", "a = b")));
     expect(planStepCheck(lone, "st-x")).toHaveProperty("notChecked");
   });
 

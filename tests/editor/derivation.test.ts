@@ -31,8 +31,11 @@ describe("extractDerivation", () => {
     ]);
   });
 
-  it("links each step to the previous one under the same spacetime block only", () => {
-    expect(derivation.steps.map((s) => s.previousId)).toEqual([null, null, "st-a", null]);
+  it("links each step to the previous non-definition step under the same spacetime block only", () => {
+    // st-a is a definition (it goes into the context), so st-b has no previous step
+    expect(derivation.steps.map((s) => s.previousId)).toEqual([null, null, null, null]);
+    const chain = extractDerivation(doc(block("sb"), step("a", "x=1"), step("d", "y=2", { kind: "definition" }), step("b", "x=y")));
+    expect(chain.steps.map((s) => s.previousId)).toEqual([null, "a", "a"]);
     expect(derivation.steps.map((s) => s.blockIndex)).toEqual([null, 0, 0, 1]);
   });
 

@@ -87,6 +87,9 @@ describe("CheckScheduler", () => {
     scheduler.apply(new Map([["st-a", plan("a = c")]]));
     calls[0].reject(new Error("worker crashed"));
     await flush();
+    calls[1].reject(new Error("worker crashed")); // retried once, then reported
+    await flush();
+    expect(calls).toHaveLength(2);
     expect(seen.at(-1)).toEqual(["st-a", { state: "failed", error: { code: "unavailable:checker", message: "worker crashed" } }]);
   });
 
@@ -108,5 +111,34 @@ describe("CheckScheduler", () => {
     calls[0].resolve(verified);
     await flush();
     expect(seen).toEqual([["st-a", { state: "pending" }]]);
+  });
+});
+
+describe("CheckScheduler with a transient failure", () => {
+  it("retries a timed-out check once and does not cache the timeout", async () => {
+    vi.useFakeTimers();
+    const seen: Array<readonly [string, StepVerdict]> = [];
+    const { checker, calls } = manualChecker();
+    const scheduler = new CheckScheduler({ checker, onVerdicts: (v) => seen.push(...v) });
+    scheduler.apply(new Map([["st-a", plan("a = c")]]));
+    calls[0].resolve({ error: { code: "timeout", message: "took too long" } });
+    await vi.advanceTimersByTimeAsync(0);
+    expect(calls).toHaveLength(2);
+    calls[1].resolve(verified);
+    await vi.advanceTimersByTimeAsync(0);
+    expect(seen.at(-1)).toEqual(["st-a", { state: "answered", answer: verified }]);
+    vi.useRealTimers();
+  });
+
+  it("keeps an unreadable step's error (not transient) without asking again", async () => {
+    const seen: Array<readonly [string, StepVerdict]> = [];
+    const { checker, calls } = manualChecker();
+    const scheduler = new CheckScheduler({ checker, onVerdicts: (v) => seen.push(...v) });
+    scheduler.apply(new Map([["st-a", plan("a = \\foo")]]));
+    calls[0].resolve({ error: { code: "unreadable", message: "unknown command \\foo" } });
+    await new Promise((r) => setTimeout(r, 0));
+    scheduler.apply(new Map([["st-a", plan("a = \\foo")]]));
+    expect(calls).toHaveLength(1);
+    expect(seen.at(-1)?.[1].state).toBe("failed");
   });
 });

@@ -5,7 +5,7 @@ import { ORBIT_CONSTANTS, SPHERICAL_COORDINATES, heading, notebook, para, spacet
 
 const f = "\\left(1-\\frac{r_s}{r}\\right)";
 
-/** Schwarzschild test-particle orbits, from the line element to the ISCO (27 steps). */
+/** Schwarzschild test-particle orbits, from the line element to the ISCO (26 steps). */
 export function buildKestrelSchwarzschildOrbits(): JSONContent {
   return notebook(
     heading(2, "Setup"),
@@ -30,18 +30,19 @@ export function buildKestrelSchwarzschildOrbits(): JSONContent {
       parameter: "\\tau",
     }),
     step("ks01", "r_s = \\frac{2GM}{c^2}", "definition"),
-    step("ks02", `ds^2 = -${f}c^2\\,dt^2 + ${f}^{-1}dr^2 + r^2\\,d\\theta^2 + r^2\\sin^2\\theta\\,d\\phi^2`, "definition"),
 
     heading(2, "Equatorial reduction"),
-    para("Spherical symmetry lets us rotate the orbit into the equatorial plane and keep it there."),
+    para("Spherical symmetry lets us rotate the orbit into the equatorial plane and keep it there; the first step starts from the block's line element."),
     step("ks03", `ds^2 = -${f}c^2\\,dt^2 + ${f}^{-1}dr^2 + r^2\\,d\\phi^2`, "substitute", "\\theta = \\frac{\\pi}{2}; d\\theta = 0"),
     para("For a massive particle ", { math: "ds^2 = -c^2\\,d\\tau^2" }, ", which fixes the norm of the four-velocity:"),
-    step("ks04", `-${f}c^2\\dot t^2 + ${f}^{-1}\\dot r^2 + r^2\\dot\\phi^2 = -c^2`, "definition"),
+    step("ks04", `-${f}c^2\\dot t^2 + ${f}^{-1}\\dot r^2 + r^2\\dot\\phi^2 = -c^2`, "substitute", "ds^2 = -c^2\\,d\\tau^2"),
 
     heading(2, "Geodesic Lagrangian and conserved quantities"),
-    step("ks05", `\\mathcal{L} = \\frac{\\mu}{2}\\left[-${f}c^2\\dot t^2 + ${f}^{-1}\\dot r^2 + r^2\\dot\\phi^2\\right]`, "definition"),
+    step("ks05", `L_{\\rm g} = \\frac{\\mu}{2}\\left[-${f}c^2\\dot t^2 + ${f}^{-1}\\dot r^2 + r^2\\dot\\phi^2\\right]`, "definition"),
     para(
-      "The Lagrangian depends on neither ",
+      "The geodesic Lagrangian ",
+      { math: "L_{\\rm g}" },
+      " depends on neither ",
       { math: "t" },
       " nor ",
       { math: "\\phi" },

@@ -31,12 +31,12 @@ export function buildLanternDeSitterCircular(): JSONContent {
     step("ld02", "f = 1 - \\frac{r_s}{r} - \\frac{\\Lambda r^2}{3}", "definition"),
 
     heading(2, "Conserved quantities and the radial equation"),
-    step("ld03", "\\mathcal{L} = \\frac{\\mu}{2}\\left(-f c^2\\dot t^2 + f^{-1}\\dot r^2 + r^2\\dot\\phi^2\\right)", "definition"),
+    step("ld03", "L_{\\rm g} = \\frac{\\mu}{2}\\left(-f c^2\\dot t^2 + f^{-1}\\dot r^2 + r^2\\dot\\phi^2\\right)", "definition"),
     step("ld04", "\\frac{d}{d\\tau}\\left(\\mu f c^2\\dot t\\right) = 0", "euler-lagrange", "t", { follows: "ld03" }),
     step("ld05", "E = \\mu c^2 f\\,\\dot t", "definition"),
     step("ld06", "\\frac{d}{d\\tau}\\left(\\mu r^2\\dot\\phi\\right) = 0", "euler-lagrange", "\\phi", { follows: "ld03" }),
     step("ld07", "L = \\mu r^2\\dot\\phi", "definition"),
-    step("ld08", "-f c^2\\dot t^2 + f^{-1}\\dot r^2 + r^2\\dot\\phi^2 = -c^2", "definition"),
+    step("ld08", "-f c^2\\dot t^2 + f^{-1}\\dot r^2 + r^2\\dot\\phi^2 = -c^2", "substitute", "ds^2 = -c^2\\,d\\tau^2; d\\theta = 0"),
     step("ld09", "V_{\\rm eff} = \\frac{\\mu c^2}{2}\\left(f - 1\\right) + \\frac{L^2 f}{2\\mu r^2}", "definition"),
     step("ld10", "\\frac{1}{2}\\mu\\dot r^2 + V_{\\rm eff} = \\frac{E^2 - \\mu^2 c^4}{2\\mu c^2}", "substitute", "", { cites: ["ld05", "ld07", "ld09"], follows: "ld08" }),
     step(

@@ -25,8 +25,9 @@ export function buildVesperReissnerNordstrom(): JSONContent {
       lineElement: `ds^2 = -${fExplicit}c^2\\,dt^2 + ${fExplicit}^{-1}dr^2 + r^2\\left(d\\theta^2 + \\sin^2\\theta\\,d\\phi^2\\right)`,
       constants: [
         ...ORBIT_CONSTANTS,
-        { symbol: "Q", dimension: "I T", note: "charge of the hole" },
-        { symbol: "\\varepsilon_0", dimension: "M^-1 L^-3 T^4 I^2", note: "vacuum permittivity" },
+        // The checker's dimensions are powers of M, L and T; charge is left undeclared.
+        { symbol: "Q", dimension: "", note: "charge of the hole (SI)" },
+        { symbol: "\\varepsilon_0", dimension: "", note: "vacuum permittivity" },
         { symbol: "r_Q", dimension: "length", note: "charge length" },
         { symbol: "f", dimension: "dimensionless", note: "metric function, step 3" },
       ],
@@ -34,22 +35,22 @@ export function buildVesperReissnerNordstrom(): JSONContent {
       parameter: "\\tau",
     }),
     step("vr01", "r_s = \\frac{2GM}{c^2}", "definition"),
-    step("vr02", "r_Q^2 = \\frac{GQ^2}{4\\pi\\varepsilon_0 c^4}", "definition"),
+    step("vr02", "r_Q = \\sqrt{\\frac{GQ^2}{4\\pi\\varepsilon_0 c^4}}", "definition"),
     step("vr03", "f = 1 - \\frac{r_s}{r} + \\frac{r_Q^2}{r^2}", "definition"),
-    step("vr04", "ds^2 = -f c^2\\,dt^2 + f^{-1}\\,dr^2 + r^2\\,d\\phi^2", "definition"),
+    step("vr04", "ds^2 = -f c^2\\,dt^2 + f^{-1}\\,dr^2 + r^2\\,d\\phi^2", "substitute", "\\theta = \\frac{\\pi}{2}; d\\theta = 0"),
 
     heading(2, "Horizons"),
     step("vr05", "r_+ = \\frac{r_s}{2} + \\sqrt{\\frac{r_s^2}{4} - r_Q^2}", "definition"),
-    step("vr06", "1 - \\frac{r_s}{r_+} + \\frac{r_Q^2}{r_+^2} = 0"),
+    step("vr06", "1 - \\frac{r_s}{r_+} + \\frac{r_Q^2}{r_+^2} = 0", "algebra", "", { follows: "vr05" }),
     para("For Vesper-3 the outer horizon sits at ", { math: "r_+ = 0.9\\,r_s" }, " and the inner one at ", { math: "r_- = 0.1\\,r_s" }, "."),
 
     heading(2, "Conserved quantities"),
-    step("vr07", "\\mathcal{L} = \\frac{\\mu}{2}\\left(-f c^2\\dot t^2 + f^{-1}\\dot r^2 + r^2\\dot\\phi^2\\right)", "definition"),
+    step("vr07", "L_{\\rm g} = \\frac{\\mu}{2}\\left(-f c^2\\dot t^2 + f^{-1}\\dot r^2 + r^2\\dot\\phi^2\\right)", "definition"),
     step("vr08", "\\frac{d}{d\\tau}\\left(\\mu f c^2\\dot t\\right) = 0", "euler-lagrange", "t", { follows: "vr07" }),
     step("vr09", "E = \\mu c^2 f\\,\\dot t", "definition"),
     step("vr10", "\\frac{d}{d\\tau}\\left(\\mu r^2\\dot\\phi\\right) = 0", "euler-lagrange", "\\phi", { follows: "vr07" }),
     step("vr11", "L = \\mu r^2\\dot\\phi", "definition"),
-    step("vr12", "-f c^2\\dot t^2 + f^{-1}\\dot r^2 + r^2\\dot\\phi^2 = -c^2", "definition"),
+    step("vr12", "-f c^2\\dot t^2 + f^{-1}\\dot r^2 + r^2\\dot\\phi^2 = -c^2", "substitute", "ds^2 = -c^2\\,d\\tau^2", { follows: "vr04" }),
 
     heading(2, "Effective potential"),
     step("vr13", "-\\frac{E^2}{\\mu^2 c^2 f} + \\frac{\\dot r^2}{f} + \\frac{L^2}{\\mu^2 r^2} = -c^2", "substitute", "", { cites: ["vr09", "vr11"], follows: "vr12" }),
@@ -78,7 +79,7 @@ export function buildVesperReissnerNordstrom(): JSONContent {
     step("vr20", "L^2 = \\frac{\\mu^2 c^2 r^2\\left(r_s r - 2r_Q^2\\right)}{2r^2 - 3r_s r + 4r_Q^2}", "substitute", "", { cites: ["vr01"] }),
     para("The photon sphere is where the denominator vanishes:"),
     step("vr21", "r_{\\rm ph} = \\frac{3r_s}{4} + \\sqrt{\\frac{9r_s^2}{16} - 2r_Q^2}", "definition"),
-    step("vr22", "2r_{\\rm ph}^2 - 3r_s r_{\\rm ph} + 4r_Q^2 = 0"),
+    step("vr22", "2r_{\\rm ph}^2 - 3r_s r_{\\rm ph} + 4r_Q^2 = 0", "algebra", "", { follows: "vr21" }),
     step(
       "vr23",
       "\\frac{d(L^2)}{dr} = \\frac{2\\mu^2 c^2 r\\left(r_s r^3 - 3r_s^2 r^2 + 9r_s r_Q^2 r - 8r_Q^4\\right)}{\\left(2r^2 - 3r_s r + 4r_Q^2\\right)^2}",
@@ -97,8 +98,8 @@ export function buildVesperReissnerNordstrom(): JSONContent {
     ),
 
     heading(2, "Uncharged limit"),
-    step("vr24", "L^2 = \\frac{\\mu^2 c^2 r_s r^2}{2r - 3r_s}", "limit", "r_Q \\to 0", { follows: "vr20" }),
-    step("vr25", "r_{\\rm ph} = \\frac{3r_s}{2}", "limit", "r_Q \\to 0", { follows: "vr21" }),
+    step("vr24", "L^2 = \\frac{\\mu^2 c^2 r_s r^2}{2r - 3r_s}", "limit", "Q \\to 0", { follows: "vr20" }),
+    step("vr25", "r_{\\rm ph} = \\frac{3r_s}{2}", "limit", "Q \\to 0", { follows: "vr21" }),
   );
 }
 
