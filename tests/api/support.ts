@@ -1,12 +1,7 @@
 // Shared set-up for route handler tests: an in-memory PGlite, mail kept in the database,
 // and a seam to choose who is signed in. Import it FIRST in a test file so the
 // environment is set before any server module reads it.
-process.env.DATA_DIR = "memory://";
-process.env.NEXTAUTH_SECRET = "route-handler-tests-only";
-delete process.env.DATABASE_URL;
-delete process.env.SMTP_URL;
-process.env.BCRYPT_ROUNDS = "4"; // fast hashes; the cost factor is not what these tests check
-
+import "./env";
 import { setCurrentUserSource, type CurrentUser } from "@/app/_server/auth";
 import { closeDb, getDb } from "@/db/client";
 import { createUser } from "@/db/queries/users";

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { actions, can, roles, type Action, type Actor, type Role } from "@/app/_server/authz";
+import { roleEnum } from "@/db/schema";
 
 // The permission matrix as the product defines it (GLOSSARY: lead manages members and
 // publishes; author writes; reviewer reads and remarks; reader reads). Written out by hand
@@ -45,6 +46,10 @@ function resourceFor(action: Action) {
 }
 
 describe("can: every role × every action", () => {
+  it("knows exactly the roles the database stores", () => {
+    expect([...roles].sort()).toEqual([...roleEnum.enumValues].sort());
+  });
+
   it("covers every action the module declares", () => {
     expect(Object.keys(expected).sort()).toEqual([...actions].sort());
   });

@@ -58,6 +58,7 @@ for (const variant of variants) {
 
     it("fills in content a notebook module provides once the row has none, and --reset-content overwrites", async () => {
       const provided = { type: "doc", content: [{ type: "paragraph" }] };
+      await handle.db.update(notebooks).set({ content: null }).where(eq(notebooks.id, demoNotebooks[1].id));
       const withContent = demoNotebooks.map((n, i) => (i === 1 ? { ...n, content: provided } : n));
       await loadDemo({ db: handle.db, notebooks: withContent });
       const [filled] = await handle.db.select().from(notebooks).where(eq(notebooks.id, demoNotebooks[1].id));
