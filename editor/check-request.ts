@@ -65,13 +65,20 @@ export function blockContext(block: DerivationBlock | null, definitions: readonl
   return { symbols, definitions: [...definitions], assumptions: [...block.assumptions], parameter: block.parameter };
 }
 
+/** The left-hand side of `symbol = expression`, without spaces ("" when there is no "="). */
+function definedSymbol(relation: string): string {
+  const equals = relation.indexOf("=");
+  return equals > 0 ? relation.slice(0, equals).replace(/\s+/g, "") : "";
+}
+
 /**
  * Plans the check of one step. `from` is the relation of the step it explicitly follows
  * (`follows`); otherwise of the first cited step — except for a substitution, whose cited
  * steps are what is substituted — otherwise of the previous non-definition step, and for
  * the first derived step under a block, the block's line element. `to` is the step's own
  * relation; the context is the nearest spacetime block above plus the definitions made
- * before it under that block.
+ * before it under that block, except definitions of declared constants through velocities
+ * (constants of motion such as E and L).
  *
  * @example
  * planStepCheck(extractDerivation(doc), "st-b") // { request: { context, from, to, justification } }
@@ -84,9 +91,14 @@ export function planStepCheck(derivation: Derivation, stepId: string): StepCheck
 
   const byId = new Map(derivation.steps.map((s) => [s.id, s]));
   const block = step.blockIndex === null ? null : derivation.blocks[step.blockIndex];
+  const declaredConstants = new Set((block?.constants ?? []).map((c) => c.symbol.replace(/\s+/g, "")));
   const definitions = derivation.steps
     .slice(0, index)
     .filter((s) => s.kind === "definition" && s.blockIndex === step.blockIndex && s.relation)
+    // A declared constant defined through velocities (E, L) is a constant of motion: its
+    // definition is used when cited, never as a rewrite rule, or "differentiate by r" would
+    // see L = μr²φ̇ vary with r. Definitions such as r_s = 2GM/c² stay in the context.
+    .filter((s) => !(declaredConstants.has(definedSymbol(s.relation)) && /\\d?dot\b/.test(s.relation)))
     .map((s) => s.relation);
   const cited = step.cites.map((id) => byId.get(id)).filter((s): s is DerivationStep => s !== undefined);
   const previous = step.previousId ? byId.get(step.previousId) : undefined;

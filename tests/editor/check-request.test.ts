@@ -109,6 +109,20 @@ describe("planStepCheck", () => {
   });
 });
 
+describe("planStepCheck and declared constants", () => {
+  it("keeps a constant of motion's definition out of the context (it is cited instead), other definitions in", () => {
+    const block = { ...schwarzschild, attrs: { ...schwarzschild.attrs, constants: [...schwarzschild.attrs.constants, { symbol: "L", dimension: "M L^2 T^-1" }] } };
+    const derivation = extractDerivation(
+      doc(block, step("st-L", "L = \\mu r^2\\dot\\phi", { kind: "definition" }), step("st-f", "f = 1 - \\frac{r_s}{r}", { kind: "definition" }), step("st-x", "V = \\frac{L^2 f}{r^2}")),
+    );
+    const plan = planStepCheck(derivation, "st-x");
+    expect("request" in plan && plan.request.context.definitions).toEqual(["f = 1 - \\frac{r_s}{r}"]);
+    const withRs = extractDerivation(doc(block, step("st-rs", "r_s = \\frac{2GM}{c^2}", { kind: "definition" }), step("st-y", "a = b")));
+    const planY = planStepCheck(withRs, "st-y");
+    expect("request" in planY && planY.request.context.definitions).toEqual(["r_s = \\frac{2GM}{c^2}"]);
+  });
+});
+
 describe("planStepCheck with an explicit source", () => {
   it("substitutes the cited steps into the step it follows, not the previous one", () => {
     const derivation = extractDerivation(

@@ -22,7 +22,6 @@ export function buildLanternDeSitterCircular(): JSONContent {
       constants: [
         ...ORBIT_CONSTANTS,
         { symbol: "\\Lambda", dimension: "L^-2", note: "cosmological constant" },
-        { symbol: "f", dimension: "dimensionless", note: "metric function, step 2" },
       ],
       assumptions: ["\\Lambda > 0", "r > r_s", "\\theta = \\frac{\\pi}{2}"],
       parameter: "\\tau",

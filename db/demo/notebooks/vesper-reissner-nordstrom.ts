@@ -29,7 +29,6 @@ export function buildVesperReissnerNordstrom(): JSONContent {
         { symbol: "Q", dimension: "", note: "charge of the hole (SI)" },
         { symbol: "\\varepsilon_0", dimension: "", note: "vacuum permittivity" },
         { symbol: "r_Q", dimension: "length", note: "charge length" },
-        { symbol: "f", dimension: "dimensionless", note: "metric function, step 3" },
       ],
       assumptions: ["r > r_+", "\\theta = \\frac{\\pi}{2}", "r_Q < \\frac{r_s}{2}"],
       parameter: "\\tau",
@@ -98,8 +97,8 @@ export function buildVesperReissnerNordstrom(): JSONContent {
     ),
 
     heading(2, "Uncharged limit"),
-    step("vr24", "L^2 = \\frac{\\mu^2 c^2 r_s r^2}{2r - 3r_s}", "limit", "Q \\to 0", { follows: "vr20" }),
-    step("vr25", "r_{\\rm ph} = \\frac{3r_s}{2}", "limit", "Q \\to 0", { follows: "vr21" }),
+    step("vr24", "L^2 = \\frac{\\mu^2 c^2 r_s r^2}{2r - 3r_s}", "limit", "r_Q \\to 0", { follows: "vr20" }),
+    step("vr25", "r_{\\rm ph} = \\frac{3r_s}{2}", "limit", "r_Q \\to 0", { follows: "vr21" }),
   );
 }
 
