@@ -37,7 +37,8 @@ export function NotebookShell({ notebookId, title, groupId, groupName, role, rea
           </span>
           {readOnly && (
             <span className="inline-flex items-center gap-1 rounded-full border border-paper-edge bg-paper-deep px-2 py-0.5 text-xs font-medium text-ink">
-              <span aria-hidden="true">◇</span> Read-only
+              <span aria-hidden="true">◇</span>
+              <span>Read-only</span>
             </span>
           )}
         </p>

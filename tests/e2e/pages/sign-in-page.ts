@@ -21,7 +21,8 @@ export class SignInPage {
     await this.submit.click();
   }
 
+  /** Our problem notice; Next's own route announcer also has the alert role, so match by its word. */
   problem() {
-    return this.page.getByRole("alert");
+    return this.page.getByRole("alert").filter({ hasText: "Problem:" });
   }
 }
