@@ -3,10 +3,26 @@ import { DashboardPage } from "./pages/dashboard-page";
 import { NotebookPage } from "./pages/notebook-page";
 import { SignInPage } from "./pages/sign-in-page";
 import { SignUpPage } from "./pages/sign-up-page";
-import { confirmEmailFromMailroom } from "./support/mailroom";
+import { confirmEmailFromMailroom, mailroomAvailable } from "./support/mailroom";
 import { demoAccounts, demoPassword, uniqueEmail } from "./support/demo-accounts";
 
-test("a visitor signs up, confirms the address, signs in, starts a group and creates a notebook", async ({ page }) => {
+test("a visitor signs up and cannot sign in with a password before confirming the address", async ({ page }) => {
+  const email = uniqueEmail("unconfirmed");
+  const password = "another-long-password";
+  const signUp = new SignUpPage(page);
+  await signUp.open();
+  await signUp.signUp({ name: "Unconfirmed Person", email, password });
+  await expect(signUp.confirmation()).toContainText(email);
+
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.signIn(email, password);
+  await expect(signIn.problem()).toContainText("Confirm your e-mail address first");
+  await expect(page).toHaveURL(/\/sign-in/);
+});
+
+test("a newcomer confirms the address, signs in, starts a group and creates a notebook", async ({ page }) => {
+  test.skip(!(await mailroomAvailable(page)), "needs the mailroom API (GET /api/mailroom) to read the confirmation link");
   const email = uniqueEmail("newcomer");
   const password = "a-long-enough-password";
 
@@ -14,7 +30,6 @@ test("a visitor signs up, confirms the address, signs in, starts a group and cre
   await signUp.open();
   await signUp.signUp({ name: "Ada Newcomer", email, password });
   await expect(signUp.confirmation()).toContainText(email);
-
   await confirmEmailFromMailroom(page, email);
 
   const signIn = new SignInPage(page);
@@ -31,19 +46,6 @@ test("a visitor signs up, confirms the address, signs in, starts a group and cre
   await new NotebookPage(page).expectTitle("First light-deflection note");
 });
 
-test("signing in before confirming the address is refused with a way forward", async ({ page }) => {
-  const email = uniqueEmail("unconfirmed");
-  const signUp = new SignUpPage(page);
-  await signUp.open();
-  await signUp.signUp({ name: "Unconfirmed Person", email, password: "another-long-password" });
-  await expect(signUp.confirmation()).toContainText(email);
-
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(email, "another-long-password");
-  await expect(signIn.problem()).toContainText("Confirm your e-mail address first");
-});
-
 test("a wrong password is refused without saying whether the account exists", async ({ page }) => {
   const signIn = new SignInPage(page);
   await signIn.open();
@@ -57,7 +59,7 @@ test("a wrong password is refused without saying whether the account exists", as
 
 test("signed-out visitors are sent to sign in and come back afterwards", async ({ page }) => {
   await page.goto("/dashboard");
-  await expect(page).toHaveURL(/\/sign-in\?callbackUrl=%2Fdashboard|\/sign-in\?callbackUrl=\/dashboard/);
+  await expect(page).toHaveURL(/\/sign-in\?callbackUrl=(%2F|\/)dashboard/);
   await new SignInPage(page).signIn(demoAccounts.lead, demoPassword);
   await new DashboardPage(page).expectLoaded();
 });

@@ -25,6 +25,17 @@ test("an author creates a notebook and finds it in the table", async ({ page }) 
   await expect(table.getByRole("row")).toHaveCount(2); // header + the one match
 });
 
+test("a member starts a second group, becomes its lead and creates a notebook there", async ({ page }) => {
+  await signInAs(page, demoAccounts.coauthor);
+  const dashboard = new DashboardPage(page);
+  const groupName = `Photon-sphere side project ${Date.now().toString(36)}`;
+  await dashboard.startGroup(groupName);
+  await expect(dashboard.groupsPanel()).toContainText("group lead");
+  await dashboard.createNotebook("Deflection angle, weak field", groupName);
+  await new NotebookPage(page).expectTitle("Deflection angle, weak field");
+  await expect(page.getByRole("navigation", { name: "Breadcrumb" }).getByRole("link", { name: groupName })).toBeVisible();
+});
+
 test("the notebooks table sorts by title on request", async ({ page }) => {
   await signInAs(page, demoAccounts.lead);
   const table = new DashboardPage(page).notebooksTable();

@@ -2,6 +2,12 @@ import { expect, type Page } from "@playwright/test";
 
 type MailroomMessage = { kind?: string; to: string[] | string; subject: string; text: string };
 
+/** Whether this server exposes the mailroom's messages (development, demo and test runs only). */
+export async function mailroomAvailable(page: Page): Promise<boolean> {
+  const response = await page.request.get("/api/mailroom");
+  return response.ok();
+}
+
 /**
  * Reads what the app "sent" from the mailroom (the local stand-in for outgoing mail) and
  * returns the first link in the newest message to `email` whose text matches `pathPattern`.
