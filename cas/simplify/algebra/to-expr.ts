@@ -46,7 +46,8 @@ export function polyExpr(ring: Ring, p: Poly): Expr {
 }
 
 function factorsExpr(ring: Ring, factors: Factors): Expr[] {
-  return [...factors].map(([id, e]) => powerOf(polyExpr(ring, ring.factors[id]), num(e)));
+  // Monomial factors first: r^2 (r - r_s), not (r - r_s) r^2.
+  return [...factors].sort(([a], [b]) => ring.factors[a].size - ring.factors[b].size || a - b).map(([id, e]) => powerOf(polyExpr(ring, ring.factors[id]), num(e)));
 }
 
 function assemble(content: Q, top: Expr[], den: Factors, ring: Ring): Expr {
