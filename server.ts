@@ -1,11 +1,15 @@
 // Server side: the one process that serves Vierbein. Migrates the database, then serves
 // Next on PORT (and, later, the co-authoring websocket on /yjs/ on the same port).
-// Run: `node --import tsx server.ts` (dev) or with NODE_ENV=production after `next build`.
+// Run: `node --import tsx --import ./app/_server/server-only-hook.mjs server.ts` (the npm
+// scripts dev/start do), with NODE_ENV=production after `next build`.
 import { createServer, type IncomingMessage } from "node:http";
 import { EventEmitter } from "node:events";
 import type { Duplex } from "node:stream";
 import next from "next";
-import { closeDb, dbKind, getDbHandle } from "./db/client";
+import { closeDb, dbKind, getDb, getDbHandle } from "./db/client";
+import { authenticateUpgrade, resolveAccess } from "./app/_server/collab/access";
+import { COLLAB_PATH_PREFIX, createCollabHub } from "./app/_server/collab/hub";
+import { notebookJsonCodec } from "./app/_server/collab/json-codec";
 
 const dev = process.env.NODE_ENV !== "production";
 const port = Number(process.env.PORT || 3000);
@@ -13,7 +17,7 @@ const hostname = process.env.HOST || "0.0.0.0";
 process.env.NEXTAUTH_URL ||= `http://localhost:${port}`;
 
 /** Paths whose websocket upgrades this server answers itself; nothing else may claim them. */
-export const YJS_PATH_PREFIX = "/yjs/";
+export const YJS_PATH_PREFIX = COLLAB_PATH_PREFIX;
 
 type UpgradeHandler = (req: IncomingMessage, socket: Duplex, head: Buffer) => void;
 
@@ -28,10 +32,9 @@ async function main(): Promise<void> {
   const handle = app.getRequestHandler();
   const nextUpgrade: UpgradeHandler = app.getUpgradeHandler();
 
-  // ---- Yjs websocket (co-authoring) -----------------------------------------------------
-  // The co-authoring work attaches its handler here; it must claim only YJS_PATH_PREFIX.
-  const yjsUpgrade = null as UpgradeHandler | null;
-  // ---------------------------------------------------------------------------------------
+  // Co-authoring: the Yjs websocket claims only YJS_PATH_PREFIX.
+  const collab = createCollabHub({ db: await getDb(), codec: notebookJsonCodec(), authenticate: authenticateUpgrade, resolveAccess });
+  const yjsUpgrade: UpgradeHandler = (req, socket, head) => collab.handleUpgrade(req, socket, head);
 
   const trustProxy = process.env.TRUST_PROXY === "1";
   const server = createServer((req, res) => {
@@ -48,8 +51,7 @@ async function main(): Promise<void> {
   server.on("upgrade", (req: IncomingMessage, socket: Duplex, head: Buffer) => {
     const pathname = new URL(req.url ?? "/", "http://localhost").pathname;
     if (pathname.startsWith(YJS_PATH_PREFIX)) {
-      if (yjsUpgrade) return yjsUpgrade(req, socket, head);
-      return socket.destroy();
+      return yjsUpgrade(req, socket, head);
     }
     // Dev: hot reload's socket. Production serves no other websockets.
     if (dev) return nextUpgrade(req, socket, head);
@@ -74,6 +76,7 @@ async function main(): Promise<void> {
     forceExit.unref();
     server.close(async () => {
       try {
+        await collab.close(); // stores what is pending before the database closes
         await app.close();
         await closeDb();
         console.info("[server] closed cleanly");
