@@ -26,9 +26,9 @@ export function kretschmann(geo: Geometry, riem: Riemann, tick: () => void = () 
     down[a][b][d][c] = rfScale(sum, q(-1n));
   }
   tick();
-  // raise one slot at a time: T^{..x..} = g^{xy} T_{..y..}
+  // Raise a and b one at a time; raise c and d together, which keeps the c, d antisymmetry the storage relies on.
   let t = down;
-  for (let slot = 0; slot < 4; slot += 1) {
+  for (let slot = 0; slot < 2; slot += 1) {
     const next = grid();
     for (let a = 0; a < n; a += 1) for (let b = 0; b < n; b += 1) for (let c = 0; c < n; c += 1) for (let d = c + 1; d < n; d += 1) {
       const idx = [a, b, c, d];
@@ -47,6 +47,21 @@ export function kretschmann(geo: Geometry, riem: Riemann, tick: () => void = () 
     t = next;
     tick();
   }
+  const up = grid();
+  for (let a = 0; a < n; a += 1) for (let b = 0; b < n; b += 1) for (let c = 0; c < n; c += 1) for (let d = c + 1; d < n; d += 1) {
+    let sum = rfZero();
+    for (let y = 0; y < n; y += 1) {
+      if (rfIsZero(ginv[c][y])) continue;
+      for (let z = 0; z < n; z += 1) {
+        if (y === z || rfIsZero(ginv[d][z]) || rfIsZero(t[a][b][y][z])) continue;
+        sum = rfAdd(ring, sum, rfMul(ring, rfMul(ring, ginv[c][y], ginv[d][z]), t[a][b][y][z]));
+      }
+    }
+    up[a][b][c][d] = sum;
+    up[a][b][d][c] = rfScale(sum, q(-1n));
+  }
+  t = up;
+  tick();
   let k = rfZero();
   for (const [a, b] of pairs) for (const [c, d] of pairs) {
     if (rfIsZero(down[a][b][c][d]) || rfIsZero(t[a][b][c][d])) continue;
