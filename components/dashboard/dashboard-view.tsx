@@ -34,7 +34,7 @@ export function DashboardView({ userName }: { userName: string }) {
           {composing && <NewNotebookForm groups={writableGroups} onCancel={() => setComposing(false)} />}
           {groups.isSuccess && groups.data.length > 0 && writableGroups.length === 0 && (
             <Notice kind="info">
-              You read and review in your groups. To start a notebook you need the author role; ask your group lead.
+              Your roles in your groups do not include writing. To start a notebook you need the author role; ask your group lead, or start a group of your own.
             </Notice>
           )}
           <NotebooksTable />

@@ -122,7 +122,7 @@ export function NotebooksTable() {
                       key={header.id}
                       scope="col"
                       aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
-                      className="px-4 py-2 font-medium text-ink-soft"
+                      className="whitespace-nowrap px-4 py-2 font-medium text-ink-soft"
                     >
                       {header.column.getCanSort() ? (
                         <button
