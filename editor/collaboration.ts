@@ -1,5 +1,6 @@
 import { getSchema, type AnyExtension, type JSONContent } from "@tiptap/core";
 import Collaboration from "@tiptap/extension-collaboration";
+import CollaborationCaret from "@tiptap/extension-collaboration-caret";
 import { prosemirrorJSONToYXmlFragment, yXmlFragmentToProsemirrorJSON } from "@tiptap/y-tiptap";
 import * as Y from "yjs";
 
@@ -42,4 +43,53 @@ export function writeJSONToYDoc(document: Y.Doc, content: JSONContent, extension
  */
 export function readJSONFromYDoc(document: Y.Doc, field: string = NOTEBOOK_FRAGMENT): JSONContent {
   return yXmlFragmentToProsemirrorJSON(document.getXmlFragment(field)) as JSONContent;
+}
+
+/** Who a co-author is, as their caret and the presence list show them. */
+export interface CoAuthor {
+  readonly name: string;
+  readonly color: string;
+  /** "active", "idle" (no input for a while) or "away" (tab hidden). */
+  readonly status?: "active" | "idle" | "away";
+}
+
+/**
+ * Our own palette for co-authors' carets: muted inks that stay readable on the paper
+ * background and differ in lightness as well as hue.
+ */
+export const CO_AUTHOR_PALETTE = ["#8a3b12", "#1f5f5b", "#5b3f8c", "#7a6a12", "#2f4f8f", "#8c2f4f", "#3f6b2a", "#6b4a2f"] as const;
+
+/** A stable colour for a user id, so a co-author keeps their colour across sessions. */
+export function colorForUser(userId: string): string {
+  let hash = 0;
+  for (const ch of userId) hash = (hash * 31 + ch.charCodeAt(0)) >>> 0;
+  return CO_AUTHOR_PALETTE[hash % CO_AUTHOR_PALETTE.length];
+}
+
+/**
+ * Co-authors' carets and selections, drawn from the provider's awareness. The caret is a
+ * thin bar with the author's name in a small tab above it.
+ *
+ * @example
+ * presenceExtension(websocketProvider, { name: "A. Author", color: colorForUser(id) })
+ */
+export function presenceExtension(provider: unknown, user: CoAuthor): AnyExtension {
+  return CollaborationCaret.configure({
+    provider,
+    user,
+    render: (peer: Record<string, unknown>) => {
+      const caret = document.createElement("span");
+      caret.className = "vb-coauthor-caret";
+      caret.style.setProperty("--coauthor", String(peer.color ?? "#555"));
+      const tab = document.createElement("span");
+      tab.className = "vb-coauthor-tab";
+      tab.textContent = String(peer.name ?? "co-author");
+      caret.append(tab);
+      return caret;
+    },
+    selectionRender: (peer: Record<string, unknown>) => ({
+      class: "vb-coauthor-selection",
+      style: `--coauthor: ${String(peer.color ?? "#555")}`,
+    }),
+  });
 }

@@ -1,7 +1,7 @@
 import type { AnyExtension } from "@tiptap/core";
 import StarterKit from "@tiptap/starter-kit";
 import type * as Y from "yjs";
-import { collaborationExtension } from "./collaboration";
+import { collaborationExtension, presenceExtension, type CoAuthor } from "./collaboration";
 import { LatexPaste } from "./latex-paste";
 import { MathDisplay } from "./math-display";
 import { MathInline } from "./math-inline";
@@ -17,6 +17,8 @@ import { StepVerdicts } from "./step-verdicts";
 export interface NotebookExtensionOptions {
   /** Bind the document to this Y.Doc; turns the starter kit's own undo history off. */
   readonly collaboration?: { readonly document: Y.Doc; readonly field?: string };
+  /** Show co-authors' carets from this provider's awareness (needs `collaboration`). */
+  readonly presence?: { readonly provider: unknown; readonly user: CoAuthor };
   /** Replacements for our nodes with a view attached (the React views live in components/). */
   readonly step?: AnyExtension;
   readonly spacetimeBlock?: AnyExtension;
@@ -51,5 +53,6 @@ export function notebookExtensions(options: NotebookExtensionOptions = {}): AnyE
     MathShortcuts,
     LatexPaste,
     ...(options.collaboration ? [collaborationExtension(options.collaboration.document, options.collaboration.field)] : []),
+    ...(options.collaboration && options.presence ? [presenceExtension(options.presence.provider, options.presence.user)] : []),
   ];
 }

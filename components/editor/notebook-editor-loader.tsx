@@ -5,9 +5,9 @@ import dynamic from "next/dynamic";
 export interface NotebookEditorLoaderProps {
   notebookId: string;
   readOnly: boolean;
-  /** The stored Tiptap JSON of the notebook; absent for a new, empty notebook. */
-  initialContent?: unknown;
   title?: string;
+  /** The signed-in user, named beside their caret for co-authors. */
+  me: { id: string; name: string; email: string };
 }
 
 // The editor touches `window` (ProseMirror view, KaTeX measuring, the check worker),

@@ -3,7 +3,6 @@
 import "katex/dist/katex.min.css";
 import "./notebook-editor.css";
 
-import { getSchema, type JSONContent } from "@tiptap/core";
 import { EditorContent, ReactNodeViewRenderer, useEditor, useEditorState } from "@tiptap/react";
 import { useEffect, useMemo, useState } from "react";
 import { notebookExtensions } from "@/editor/notebook-extensions";
@@ -14,18 +13,20 @@ import { stepVerdictsKey, tallyVerdicts } from "@/editor/step-verdicts";
 import { EditorToolbar } from "./editor-toolbar";
 import { NotebookOutline, jumpTo } from "./notebook-outline";
 import type { NotebookEditorLoaderProps } from "./notebook-editor-loader";
-import { SaveIndicator } from "./save-indicator";
+import { CoAuthorList } from "./co-author-list";
+import { LinkIndicator } from "./link-indicator";
 import { SpacetimeBlockView } from "./spacetime-block-view";
 import { createNotebookChecker, type NotebookChecker } from "./step-checker-client";
 import { StepView } from "./step-view";
-import { useAutosave } from "./use-autosave";
+import { useCollaboration, type Collaboration } from "./use-collaboration";
+import { colorForUser } from "@/editor/collaboration";
 import { useStepChecks } from "./use-step-checks";
 import { VerdictSummary } from "./verdict-summary";
 
-const EMPTY_NOTEBOOK: JSONContent = { type: "doc", content: [{ type: "paragraph" }] };
-
-function withViews() {
+function withViews(session: Collaboration, me: { name: string; color: string }) {
   return notebookExtensions({
+    collaboration: { document: session.doc },
+    presence: { provider: session.provider, user: { ...me, status: "active" } },
     step: Step.extend({
       addNodeView: () =>
         ReactNodeViewRenderer(StepView, {
@@ -41,36 +42,44 @@ function withViews() {
   });
 }
 
-/** Checks stored content against the schema before the editor sees it, so a damaged document is never overwritten. */
-function openContent(initial: unknown): { content: JSONContent; problem: string | null } {
-  if (initial === undefined || initial === null) return { content: EMPTY_NOTEBOOK, problem: null };
-  try {
-    getSchema(notebookExtensions()).nodeFromJSON(initial).check();
-    return { content: initial as JSONContent, problem: null };
-  } catch (cause) {
-    return { content: EMPTY_NOTEBOOK, problem: cause instanceof Error ? cause.message : "unreadable content" };
-  }
-}
-
 /**
  * The notebook editor: the reading column with steps and their verdict margin, the outline,
  * the verdict summary and the saved state. Readers and reviewers get it read-only.
  */
-export function NotebookEditor({ notebookId, readOnly, initialContent, title }: NotebookEditorLoaderProps) {
-  const opened = useMemo(() => openContent(initialContent), [initialContent]);
-  const locked = readOnly || opened.problem !== null;
+export function NotebookEditor({ notebookId, readOnly, title, me }: NotebookEditorLoaderProps) {
+  const myself = useMemo(() => ({ name: me.name || me.email, color: colorForUser(me.id) }), [me.id, me.name, me.email]);
+  const session = useCollaboration(notebookId, myself);
+  if (!session) return <p role="status" className="py-12 text-sm text-ink-muted">Opening the notebook…</p>;
+  return <SharedNotebookEditor session={session} readOnly={readOnly} title={title} myself={myself} />;
+}
+
+/** The editor bound to an open shared document (see {@link useCollaboration}). */
+function SharedNotebookEditor({
+  session,
+  readOnly,
+  title,
+  myself,
+}: {
+  session: Collaboration;
+  readOnly: boolean;
+  title?: string;
+  myself: { name: string; color: string };
+}) {
+  const locked = readOnly || session.link.kind === "refused";
   // Made in an effect (not a memo) so a remount under React's strict mode gets a live worker.
   const [checker, setChecker] = useState<NotebookChecker | null>(null);
   useEffect(() => {
     const created = createNotebookChecker();
+    // eslint-disable-next-line react-hooks/set-state-in-effect -- the worker is an external resource made once per mount
     setChecker(created);
     return () => created.dispose();
   }, []);
-  const extensions = useMemo(() => withViews(), []);
+  const { doc, provider } = session;
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- the document and provider identify the session
+  const extensions = useMemo(() => withViews(session, myself), [doc, provider, myself]);
 
   const editor = useEditor({
     extensions,
-    content: opened.content,
     editable: !locked,
     immediatelyRender: false,
     editorProps: {
@@ -82,8 +91,10 @@ export function NotebookEditor({ notebookId, readOnly, initialContent, title }: 
     },
   });
 
+  useEffect(() => {
+    if (editor && !editor.isDestroyed && editor.isEditable === locked) editor.setEditable(!locked);
+  }, [editor, locked]);
   useStepChecks(editor, checker);
-  const { state: saveState, saveNow } = useAutosave(editor, notebookId, !locked);
 
   const view = useEditorState({
     editor,
@@ -98,7 +109,7 @@ export function NotebookEditor({ notebookId, readOnly, initialContent, title }: 
     },
   });
 
-  if (!editor || !view) {
+  if (!editor || !view || !session.loaded) {
     return <p role="status" className="py-12 text-sm text-ink-muted">Opening the notebook…</p>;
   }
 
@@ -127,21 +138,14 @@ export function NotebookEditor({ notebookId, readOnly, initialContent, title }: 
               probabilistic={view.probabilistic}
               onJumpToRefuted={firstRefuted ? () => jumpTo(editor, firstRefuted.pos) : null}
             />
-            {locked ? (
-              <p className="font-sans text-xs text-ink-muted">{readOnly ? "Read-only: you can read and follow the verdicts." : "Opened read-only."}</p>
-            ) : (
-              <SaveIndicator state={saveState} onRetry={() => void saveNow()} />
-            )}
+            <div className="flex flex-col items-end gap-1">
+              {locked ? <p className="font-sans text-xs text-ink-muted">Read-only: you can read and follow the verdicts.</p> : null}
+              <LinkIndicator link={session.link} readOnly={locked} />
+            </div>
           </div>
+          <CoAuthorList coAuthors={session.coAuthors} />
           {!locked ? <EditorToolbar editor={editor} /> : null}
         </div>
-
-        {opened.problem ? (
-          <p role="alert" className="mb-4 rounded-md border border-alarm bg-alarm-wash px-3 py-2 font-sans text-sm text-alarm">
-            The stored text of this notebook does not fit the editor ({opened.problem}). It has been left untouched on the server and is not shown; nothing will be saved
-            over it from this page.
-          </p>
-        ) : null}
 
         <EditorContent editor={editor} />
       </div>

@@ -48,6 +48,7 @@ export class NotebookRoom {
   private idleTimer: NodeJS.Timeout | undefined;
   /** Updates received but not yet stored; stored together in one write (group commit). */
   private pending: { update: Uint8Array; peer: Peer }[] = [];
+  private keepStoredJson = false;
   readonly ready: Promise<void>;
 
   constructor(private readonly options: RoomOptions) {
@@ -78,8 +79,14 @@ export class NotebookRoom {
     this.lastStoredId = stored.updates.at(-1)?.id ?? stored.compactedThrough;
     // A notebook that was only ever saved as JSON (demo data) moves into co-editing once.
     if (!stored.snapshot && stored.updates.length === 0 && stored.content) {
-      this.options.codec.writeJson(this.doc, stored.content);
-      await this.compact();
+      try {
+        this.options.codec.writeJson(this.doc, stored.content);
+        await this.compact();
+      } catch (error) {
+        // Stored JSON the schema cannot read stays as it is: never written over from here.
+        this.keepStoredJson = true;
+        this.options.log?.(`[collab] stored JSON of ${this.options.notebookId} does not fit the schema`, error);
+      }
     }
   }
 
@@ -179,7 +186,7 @@ export class NotebookRoom {
     const throughId = this.lastStoredId;
     let content: Record<string, unknown> | null = null;
     try {
-      content = this.options.codec.readJson(this.doc);
+      if (!this.keepStoredJson) content = this.options.codec.readJson(this.doc);
     } catch (error) {
       this.options.log?.(`[collab] could not derive JSON for ${this.options.notebookId}`, error);
     }

@@ -46,7 +46,7 @@ export default async function NotebookPage({ params }: { params: Promise<{ id: s
         notebookId={notebook.id}
         readOnly={readOnly}
         title={notebook.title}
-        initialContent={notebook.content ?? undefined}
+        me={{ id: user.id, name: user.name, email: user.email }}
       />
     </NotebookShell>
   );

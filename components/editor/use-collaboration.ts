@@ -1,0 +1,125 @@
+"use client";
+
+import { useEffect, useState } from "react";
+import * as Y from "yjs";
+import { WebsocketProvider } from "y-websocket";
+import { IndexeddbPersistence } from "y-indexeddb";
+import { StoredStateTracker } from "@/editor/stored-state";
+import type { CoAuthor } from "@/editor/collaboration";
+
+/** What the page says about the link to the server, in plain words. */
+export type LinkState =
+  | { kind: "connecting" }
+  | { kind: "online"; unstored: number }
+  | { kind: "offline"; unstored: number }
+  | { kind: "refused"; message: string };
+
+export interface Collaboration {
+  readonly doc: Y.Doc;
+  readonly provider: WebsocketProvider;
+  /** True once the server's copy (or, offline, this browser's copy) has been loaded. */
+  readonly loaded: boolean;
+  readonly link: LinkState;
+  readonly coAuthors: readonly (CoAuthor & { clientId: number })[];
+}
+
+const IDLE_AFTER_MS = 60_000;
+
+/**
+ * Opens a notebook's shared document: the websocket to our server (same origin, the
+ * session cookie authenticates it), a copy in IndexedDB so a tab that loses the link keeps
+ * its edits and merges them on return, presence with idle/away, and the stored state.
+ */
+export function useCollaboration(notebookId: string, me: CoAuthor): Collaboration | null {
+  const [session, setSession] = useState<Collaboration | null>(null);
+
+  useEffect(() => {
+    const doc = new Y.Doc();
+    const local = new IndexeddbPersistence(`vierbein-notebook-${notebookId}`, doc);
+    const scheme = window.location.protocol === "https:" ? "wss" : "ws";
+    const provider = new WebsocketProvider(`${scheme}://${window.location.host}/yjs`, notebookId, doc, { maxBackoffTime: 5_000 });
+    const tracker = new StoredStateTracker(doc);
+    let loaded = false;
+    let refused: string | null = null;
+    let lastInput = Date.now();
+
+    const publish = () => {
+      const unstored = tracker.unstoredCount();
+      const link: LinkState = refused
+        ? { kind: "refused", message: refused }
+        : provider.wsconnected && provider.synced
+          ? { kind: "online", unstored }
+          : loaded
+            ? { kind: "offline", unstored }
+            : { kind: "connecting" };
+      const coAuthors = [...provider.awareness.getStates().entries()]
+        .filter(([clientId, state]) => clientId !== doc.clientID && state.user)
+        .map(([clientId, state]) => ({ clientId, ...(state.user as CoAuthor) }));
+      setSession({ doc, provider, loaded, link, coAuthors });
+    };
+
+    const setStatus = (status: CoAuthor["status"]) => {
+      const current = provider.awareness.getLocalState()?.user as CoAuthor | undefined;
+      if (current?.status !== status) provider.awareness.setLocalStateField("user", { ...me, status });
+    };
+    provider.awareness.setLocalStateField("user", { ...me, status: "active" });
+
+    const onServerMessage = (event: MessageEvent) => {
+      if (event.data instanceof ArrayBuffer) tracker.noteServerMessage(new Uint8Array(event.data));
+      publish();
+    };
+    const onStatus = () => {
+      provider.ws?.removeEventListener("message", onServerMessage);
+      provider.ws?.addEventListener("message", onServerMessage);
+      publish();
+    };
+    const onClose = (event: CloseEvent | null) => {
+      // 4403: the server says this account may no longer open the notebook.
+      if (event?.code === 4403) {
+        refused = "Your role in this group changed; this notebook is no longer open to you.";
+        provider.shouldConnect = false;
+      }
+      publish();
+    };
+    const onSync = (synced: boolean) => {
+      if (synced) loaded = true;
+      publish();
+    };
+    local.once("synced", () => {
+      loaded = true;
+      publish();
+    });
+    provider.on("status", onStatus);
+    provider.on("sync", onSync);
+    provider.on("connection-close", onClose);
+    provider.awareness.on("change", publish);
+    doc.on("update", publish);
+
+    const onInput = () => {
+      lastInput = Date.now();
+      setStatus(document.visibilityState === "hidden" ? "away" : "active");
+    };
+    const onVisibility = () => setStatus(document.visibilityState === "hidden" ? "away" : Date.now() - lastInput > IDLE_AFTER_MS ? "idle" : "active");
+    const idleTimer = window.setInterval(onVisibility, 15_000);
+    window.addEventListener("keydown", onInput);
+    window.addEventListener("pointerdown", onInput);
+    document.addEventListener("visibilitychange", onVisibility);
+    publish();
+
+    return () => {
+      window.clearInterval(idleTimer);
+      window.removeEventListener("keydown", onInput);
+      window.removeEventListener("pointerdown", onInput);
+      document.removeEventListener("visibilitychange", onVisibility);
+      provider.ws?.removeEventListener("message", onServerMessage);
+      provider.destroy();
+      void local.destroy();
+      doc.destroy();
+      setSession(null);
+    };
+    // The user's name and colour are fixed for the page's life; a new notebook id reopens.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [notebookId]);
+
+  return session;
+}
