@@ -79,7 +79,7 @@ export function isRelation(s: Statement): s is Relation {
 
 /** The variable name under which a dotted symbol is bound in evaluation environments (`\dot r` → `r_dot`, `\ddot r` → `r_ddot`). */
 export function dotVariable(name: string, order: number): string {
-  return `${name}_${"d".repeat(order)}dot`;
+  return `${name}_${"d".repeat(order - 1)}dot`;
 }
 
 /** The variable name under which a differential is bound (`dt` → `d_t`). */
