@@ -1,12 +1,12 @@
 import type { Expr, Relation, Statement } from "../expr/types";
 import { dotVariable, differentialVariable, isBuiltinFunction } from "../expr/types";
 import { freeVariables, mapExpr } from "../expr/traverse";
-import { mul, num, sym } from "../expr/build";
+import { dot, mul, num, sym } from "../expr/build";
 import { differentiate } from "../calculus/differentiate";
 import { concreteFunction, type ConcreteFunction } from "../numeric/concrete-functions";
 import type { RandomStream } from "../numeric/random";
 import { Undecidable } from "./errors";
-import { bindVariables, flatten, mapStatement, movingNames, signedVariables, variableOf } from "./variables";
+import { bindVariables, flatten, mapStatement, movingNames, signedVariables, variableOf, walkStatement } from "./variables";
 
 /** A step's context after reading: definitions and assumptions as trees, names as plain identifiers. */
 export interface ParsedContext {
@@ -107,14 +107,22 @@ function concretize(e: Expr, registry: Map<string, { f: ConcreteFunction; arity:
   });
 }
 
-/** Carries out every Leibniz derivative; by the parameter it is the total derivative along the curve. */
+/**
+ * Carries out every Leibniz derivative; by the parameter it is the total
+ * derivative along the curve, by a dotted variable (∂L/∂ṙ, read as by `r_dot`)
+ * a partial derivative with the dots held as independent variables.
+ */
 export function lowerDerivatives(e: Expr, parameter: string, coordinates: readonly string[]): Expr {
+  const dotted = new Map<string, Expr>();
+  for (const x of coordinates) for (let order = 1; order <= 4; order += 1) dotted.set(dotVariable(x, order), dot(x, order));
   return mapExpr(e, (n) => {
     if (n.kind !== "deriv") return n;
     let out = n.of;
     for (let i = 0; i < n.order; i += 1) {
       try {
-        out = n.by === parameter ? differentiate(out, n.by, { coordinates }) : differentiate(out, n.by);
+        if (n.by === parameter) out = differentiate(out, n.by, { coordinates });
+        else if (dotted.has(n.by)) out = bindVariables(differentiate(flatten(out), n.by), dotted);
+        else out = differentiate(out, n.by);
       } catch (err) {
         throw new Undecidable(err instanceof Error ? err.message : String(err));
       }
@@ -159,10 +167,13 @@ export function prepareProblem(statements: readonly Statement[], context: Parsed
   let flatImplicit = stagedImplicit.map((r) => mapStatement(r, flatten) as Relation);
   const flatAssumptions = stagedAssumptions.map((r) => mapStatement(r, flatten) as Relation);
 
-  const names = new Set<string>();
-  for (const s of [...flat, ...flatImplicit]) for (const v of freeVariables(s)) names.add(v);
-  const mixes = [...names].some((v) => v.startsWith("d_")) && [...names].some((v) => /_d+dot$/.test(v));
-  if (mixes) {
+  let differentials = false;
+  let dots = false;
+  for (const s of [...staged, ...stagedImplicit]) walkStatement(s, (n) => {
+    if (n.kind === "differential") differentials = true;
+    if (n.kind === "dot") dots = true;
+  });
+  if (differentials && dots) {
     const links = linkDifferentials(context.parameter, moving);
     flat = flat.map((s) => mapStatement(s, (e) => bindVariables(e, links)));
     flatImplicit = flatImplicit.map((r) => mapStatement(r, (e) => bindVariables(e, links)) as Relation);

@@ -85,3 +85,13 @@ describe("checkStep answers", () => {
     expect(answer.reason).toMatch(/circular/);
   });
 });
+
+describe("partial derivatives by a dotted coordinate", () => {
+  it("verifies ∂L/∂ṙ of the radial kinetic term and the momentum's τ-derivative (Carroll (2004) ch. 5)", () => {
+    const context = { symbols: { r: "length", r_s: "length" }, assumptions: ["r > r_s"] };
+    const L = "\\frac{\\dot r^2}{1-\\frac{r_s}{r}}";
+    expect(checkStep({ context, from: "", to: `\\frac{\\partial}{\\partial \\dot r}\\left(${L}\\right) = \\frac{2\\dot r}{1-\\frac{r_s}{r}}` }).verdict).toBe("verified");
+    expect(checkStep({ context, from: "", to: `\\frac{d}{d\\tau}\\frac{\\partial}{\\partial \\dot r}\\left(${L}\\right) = \\frac{2\\ddot r}{1-\\frac{r_s}{r}} - \\frac{2 r_s\\dot r^2}{r^2\\left(1-\\frac{r_s}{r}\\right)^2}` }).verdict).toBe("verified");
+    expect(checkStep({ context, from: "", to: `\\frac{\\partial}{\\partial \\dot r}\\left(${L}\\right) = \\frac{\\dot r}{1-\\frac{r_s}{r}}` }).verdict).toBe("refuted");
+  });
+});
