@@ -28,7 +28,8 @@ export interface ParsedStep {
   readonly justification: ParsedJustification;
 }
 
-export const PROBABILISTIC_NOTE = "A numeric verdict is probabilistic: agreement at random points is strong evidence, not a proof.";
+export const PROBABILISTIC_NOTE =
+  "A numeric verdict is probabilistic: agreement at random points is strong evidence, not a proof. Symbols were sampled positive and of order one unless the assumptions say otherwise; velocities and differentials took both signs.";
 
 function numericAnswer(outcome: ProbeOutcome, functions: Record<string, string>, settings: ProbeSettings, detail: string): CheckAnswer {
   const substituted = Object.keys(functions).length ? { substitutedFunctions: functions } : {};
