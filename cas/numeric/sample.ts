@@ -96,6 +96,9 @@ export function pointSampler(D: DecimalContext, domain: Domain, rng: RandomStrea
   const bounds = boundsOf(domain.conditions, drawn);
   const order = drawOrder(drawn, bounds, fixed);
   const u = (lo: number, hi: number) => new D(randomDecimalText(rng, lo, hi));
+  // Distance from a one-sided bound: half the draws spread evenly, half crowd towards the bound
+  // (log-uniform down to 10^-3 of its size), so a claim that fails only near r = 3GM/c² is caught.
+  const gap = () => (rng.next() < 0.5 ? u(0.1, 3) : new D(10).pow(new D(randomDecimalText(rng, -3, 0.45))));
   const draw = (v: string, point: Point): Decimal | null => {
     const f = fixed.get(v);
     if (f) {
@@ -110,9 +113,9 @@ export function pointSampler(D: DecimalContext, domain: Domain, rng: RandomStrea
     const lo = lows.length ? D.max(...lows) : null;
     const hi = highs.length ? D.min(...highs) : null;
     if (lo && hi) return lo.lt(hi) ? lo.plus(hi.minus(lo).times(u(0.05, 0.95))) : null;
-    if (lo) return lo.plus(D.max(lo.abs(), 0.5).times(u(0.1, 3)));
+    if (lo) return lo.plus(D.max(lo.abs(), 0.5).times(gap()));
     if (hi) {
-      if (domain.signed.has(v) || hi.lte(0)) return hi.minus(D.max(hi.abs(), 0.5).times(u(0.1, 3)));
+      if (domain.signed.has(v) || hi.lte(0)) return hi.minus(D.max(hi.abs(), 0.5).times(gap()));
       return hi.times(u(0.05, 0.95));
     }
     if (domain.signed.has(v)) return u(0.3, 2.5).times(rng.next() < 0.5 ? -1 : 1);

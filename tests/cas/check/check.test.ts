@@ -95,3 +95,12 @@ describe("partial derivatives by a dotted coordinate", () => {
     expect(checkStep({ context, from: "", to: `\\frac{\\partial}{\\partial \\dot r}\\left(${L}\\right) = \\frac{\\dot r}{1-\\frac{r_s}{r}}` }).verdict).toBe("refuted");
   });
 });
+
+describe("inequalities between steps", () => {
+  const context = { symbols: { G: null, M: null, r: null } };
+  it("r > 3GM/c² gives r > 2GM/c² but not the converse (ISCO/photon-sphere ordering, Hartle (2003) ch. 9)", () => {
+    expect(checkStep({ context, from: "r > \\frac{3GM}{c^2}", to: "r > \\frac{2GM}{c^2}" }).verdict).toBe("verified");
+    // Regression: points drawn only far from the bound once let the converse pass.
+    expect(checkStep({ context, from: "r > \\frac{2GM}{c^2}", to: "r > \\frac{3GM}{c^2}" }).verdict).toBe("refuted");
+  });
+});
