@@ -70,7 +70,9 @@ export class NodeCasPool {
   }
 
   private spawn(): Slot {
-    const worker = new Worker(entryPath(), { resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB, stackSizeMb: 8 } });
+    // Reflect.construct, not `new Worker(...)`: Next's bundler rewrites the literal form into a
+    // bundled worker chunk, and the entry (tsx's loader) must run from disk as it is.
+    const worker: Worker = Reflect.construct(Worker, [entryPath(), { resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB, stackSizeMb: 8 } }]);
     const slot: Slot = { worker, ready: false, job: null, timer: null };
     worker.on("message", (message: { ready?: true; id?: number; outcome?: VerbOutcome }) => {
       if (message.ready) {
@@ -125,7 +127,10 @@ export class NodeCasPool {
     }
     // Keep the process alive only while work is pending.
     const busy = this.queue.length > 0 || this.slots.some((s) => s.job);
-    for (const slot of this.slots) (busy ? slot.worker.ref() : slot.worker.unref());
+    for (const slot of this.slots) {
+      if (busy) slot.worker.ref();
+      else slot.worker.unref();
+    }
   }
 }
 
