@@ -41,6 +41,8 @@ export class NodeCasPool {
   private readonly queue: Job[] = [];
   private nextId = 1;
   private closed = false;
+  /** Workers that died before ever becoming ready, in a row: a broken entry must not respawn forever. */
+  private failedStarts = 0;
 
   constructor(private readonly options: { size?: number; timeLimitMs?: number } = {}) {
     const size = Math.max(1, Math.min(4, options.size ?? 1));
@@ -77,6 +79,7 @@ export class NodeCasPool {
     worker.on("message", (message: { ready?: true; id?: number; outcome?: VerbOutcome }) => {
       if (message.ready) {
         slot.ready = true;
+        this.failedStarts = 0;
         this.dispatch();
         return;
       }
@@ -113,6 +116,13 @@ export class NodeCasPool {
     this.slots.splice(index, 1);
     void slot.worker.terminate();
     job?.resolve(outcome);
+    if (!slot.ready) this.failedStarts += 1;
+    if (this.failedStarts >= 3) {
+      console.error("cas workers fail to start; requests are refused until restart");
+      for (const waiting of this.queue.splice(0)) waiting.resolve({ ok: false, error: { code: "internal", message: "the checker could not start" } });
+      if (this.slots.length === 0) this.closed = true;
+      return;
+    }
     if (!this.closed) this.slots.push(this.spawn());
     this.dispatch();
   }
