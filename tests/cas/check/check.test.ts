@@ -18,6 +18,8 @@ describe("checkStep on the step corpus (sources named per step in step-corpus.ts
         expect(answer.witness && Object.keys(answer.witness).length).toBeGreaterThan(0);
         for (const v of Object.values(answer.witness ?? {})) expect(v).toMatch(/^-?\d/);
       }
+      // A correct step of the corpus is dimensionally sound (or not fully declared, e.g. A(r)).
+      if (s.expected === "verified") expect(answer.dimensions?.status ?? "consistent").not.toBe("inconsistent");
       if (answer.verdict === "verified" && answer.method.kind === "numeric") {
         expect(answer.method.points).toBeGreaterThanOrEqual(8);
         expect(answer.method.detail).toMatch(/probabilistic|formal/);

@@ -23,7 +23,7 @@ export interface CorpusStep {
 const symbols = {
   t: "time", r: "length", "\\theta": "dimensionless", "\\phi": "dimensionless", "\\tau": "time",
   r_s: "length", M: "mass", "\\mu": "mass", E: "energy", L: "angular momentum",
-  "V_{\\rm eff}": "energy", a: "length", e: "dimensionless", "\\epsilon": "M^0 L^2 T^-2", "\\ell": "L^2 T^-1",
+  "V_{\\rm eff}": "energy", a: "length", e: "dimensionless", "\\epsilon": "M^0 L^2 T^-2", "\\ell": "L^2 T^-1", "E_{N}": "energy",
 } as const;
 
 const base: CheckContext = { symbols, assumptions: ["r > r_s"], definitions: [] };
@@ -166,6 +166,10 @@ export const STEP_CORPUS: readonly CorpusStep[] = [
     { context: base, from: veffRhs, to: "-\\frac{GM\\mu}{r} + \\frac{L^2}{2\\mu r^2}", justification: { kind: "limit", symbol: "c", to: "\\infty" } }),
   step("newtonian-limit-factor2", "centrifugal term without the ½", OURS, "refuted",
     { context: base, from: veffRhs, to: "-\\frac{GM\\mu}{r} + \\frac{L^2}{\\mu r^2}", justification: { kind: "limit", symbol: "c", to: "\\infty" } }),
+  step("newtonian-energy-equation", "the radial energy equation as c → ∞ keeps its Newtonian terms", `${C5} (Newtonian limit of the orbit equation); ${MTW25}`, "verified",
+    { context: base, from: "\\frac{1}{2}\\mu\\dot r^2 - \\frac{GM\\mu}{r} + \\frac{L^2}{2\\mu r^2} - \\frac{GML^2}{\\mu c^2 r^3} = E_{N}", to: "\\frac{1}{2}\\mu\\dot r^2 - \\frac{GM\\mu}{r} + \\frac{L^2}{2\\mu r^2} = E_{N}", justification: { kind: "limit", symbol: "c", to: "\\infty" } }),
+  step("newtonian-energy-equation-sign", "the centrifugal term with the wrong sign", OURS, "refuted",
+    { context: base, from: "\\frac{1}{2}\\mu\\dot r^2 - \\frac{GM\\mu}{r} + \\frac{L^2}{2\\mu r^2} - \\frac{GML^2}{\\mu c^2 r^3} = E_{N}", to: "\\frac{1}{2}\\mu\\dot r^2 - \\frac{GM\\mu}{r} - \\frac{L^2}{2\\mu r^2} = E_{N}", justification: { kind: "limit", symbol: "c", to: "\\infty" } }),
   step("relativistic-term-vanishes", "GML^2/(μc^2r^3) → 0", `${C5} (the relativistic correction)`, "verified",
     { context: base, from: "\\frac{GML^2}{\\mu c^2 r^3}", to: "0", justification: { kind: "limit", symbol: "c", to: "\\infty" } }),
   step("lost-c2-does-not-vanish", "with c^2 lost the term stays", OURS, "refuted",

@@ -68,7 +68,7 @@ export function sympyJob(step: CorpusStep): Record<string, unknown> | null {
     case "euler-lagrange":
       return from ? { ...base, kind: "euler-lagrange", coordinate: j.coordinate, from: [src(from.kind === "relation" ? from.rhs : from)], to } : null;
     case "limit":
-      return from && from.kind !== "relation" ? { ...base, kind: "limit", symbol: j.symbol, from: [src(from)], to } : null;
+      return from ? { ...base, kind: "limit", symbol: j.symbol, from: sides(from).map(src), to } : null;
     case "differentiate": {
       if (!from) return null;
       if (from.kind !== "relation") return { ...base, kind: "expr-equal", from: [`diff(${src(from)}, V('${j.by}'))`], to };

@@ -91,8 +91,9 @@ def decide(job):
     if kind == "expr-equal":
         return "verified" if simplify(prepare(read(job["from"][0])) - to_l) == 0 else "refuted"
     if kind == "limit":
-        lim = limit(read(job["from"][0]), V(job["symbol"]), oo)
-        return "verified" if simplify(prepare(lim) - to_l) == 0 else "refuted"
+        # For relations, lim(lhs - rhs) of the previous step against lhs - rhs of the new one.
+        lim = limit(read(job["from"][0]) - read(job["from"][1]), V(job["symbol"]), oo)
+        return "verified" if simplify(prepare(lim) - claim) == 0 else "refuted"
     if kind == "euler-lagrange":
         lagrangian = read(job["from"][0])
         x = job["coordinate"]
