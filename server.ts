@@ -33,7 +33,7 @@ async function main(): Promise<void> {
   const nextUpgrade: UpgradeHandler = app.getUpgradeHandler();
 
   // Co-authoring: the Yjs websocket claims only YJS_PATH_PREFIX.
-  const collab = createCollabHub({ db: await getDb(), codec: notebookJsonCodec(), authenticate: authenticateUpgrade, resolveAccess });
+  const collab = createCollabHub({ db: await getDb(), codec: notebookJsonCodec(), authenticate: authenticateUpgrade, resolveAccess, register: true });
   const yjsUpgrade: UpgradeHandler = (req, socket, head) => collab.handleUpgrade(req, socket, head);
 
   const trustProxy = process.env.TRUST_PROXY === "1";

@@ -25,6 +25,8 @@ export interface CollabHubOptions {
   /** Largest message accepted from a client, in bytes. */
   readonly maxMessageBytes?: number;
   readonly log?: (message: string, error?: unknown) => void;
+  /** Make this the process's hub for {@link registered} (the server does; tests need not). */
+  readonly register?: boolean;
 }
 
 export interface CollabHub {
@@ -33,6 +35,8 @@ export interface CollabHub {
   /** Stores everything pending, closes every socket. */
   close(): Promise<void>;
   readonly rooms: ReadonlyMap<string, NotebookRoom>;
+  /** Runs `job` on the notebook's live room (opened for the job if no one has it open). */
+  withRoom<T>(notebookId: string, job: (room: NotebookRoom) => Promise<T>): Promise<T>;
 }
 
 /**
@@ -121,8 +125,22 @@ export function createCollabHub(options: CollabHubOptions): CollabHub {
     room.join(peer);
   };
 
-  return {
+  const hub: CollabHub = {
     rooms,
+    async withRoom(notebookId, job) {
+      const room = await openRoom(notebookId);
+      if (!room) throw new Error(`notebook ${notebookId} does not exist`);
+      room.expecting += 1;
+      try {
+        return await job(room);
+      } finally {
+        if (room.peers.size === 0 && room.expecting === 1) {
+          await room.leaveEmpty();
+          dropIfUnused(notebookId, room);
+        }
+        room.expecting -= 1;
+      }
+    },
     handleUpgrade(req, socket, head) {
       const pathname = new URL(req.url ?? "/", "http://localhost").pathname;
       const parsed = notebookIdSchema.safeParse(decodeURIComponent(pathname.slice(COLLAB_PATH_PREFIX.length)));
@@ -155,6 +173,18 @@ export function createCollabHub(options: CollabHubOptions): CollabHub {
       for (const client of wss.clients) client.close(1001, "server closing");
       await Promise.all([...rooms.values()].map((room) => room.flush()));
       wss.close();
+      if (registered() === hub) (globalThis as Record<symbol, unknown>)[hubKey] = undefined;
     },
   };
+  if (options.register) (globalThis as Record<symbol, unknown>)[hubKey] = hub;
+  return hub;
+}
+
+// The hub lives in server.ts's module graph; route handlers (Next's bundle, same process)
+// reach it through globalThis to edit a notebook that people may have open.
+const hubKey = Symbol.for("vierbein.collab.hub");
+
+/** The process's co-editing hub, when the server started one. */
+export function registered(): CollabHub | undefined {
+  return (globalThis as Record<symbol, unknown>)[hubKey] as CollabHub | undefined;
 }

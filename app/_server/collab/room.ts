@@ -47,7 +47,7 @@ export class NotebookRoom {
   private compactedThrough = 0;
   private idleTimer: NodeJS.Timeout | undefined;
   /** Updates received but not yet stored; stored together in one write (group commit). */
-  private pending: { update: Uint8Array; peer: Peer }[] = [];
+  private pending: { update: Uint8Array; userId: string | null; peer: Peer | null }[] = [];
   private keepStoredJson = false;
   readonly ready: Promise<void>;
 
@@ -110,6 +110,11 @@ export class NotebookRoom {
     return this.peers.size === 0;
   }
 
+  /** Stores and compacts what a room opened without sockets (a server-side edit) changed. */
+  async leaveEmpty(): Promise<void> {
+    await this.enqueue(() => this.compactIfDirty());
+  }
+
   /** Handles one binary message from a peer. Malformed messages throw; the caller closes that socket. */
   async receive(peer: Peer, data: Uint8Array): Promise<void> {
     const message = decodeClientMessage(data);
@@ -121,7 +126,7 @@ export class NotebookRoom {
         if (peer.access !== "write") return; // read-only: refused here, not just hidden in the UI
         // Refuse bytes that are not a Yjs update before they reach the log.
         Y.decodeUpdate(message.update);
-        this.pending.push({ update: message.update, peer });
+        this.pending.push({ update: message.update, userId: peer.userId, peer });
         if (this.pending.length === 1) void this.enqueue(() => this.storePending());
         return;
       case "awareness":
@@ -133,6 +138,24 @@ export class NotebookRoom {
     }
   }
 
+  /**
+   * Applies a change made on the server (a checkpoint restore): the change is computed on a
+   * copy, stored like any writer's update, then applied and broadcast to every peer.
+   */
+  async applyServerEdit(edit: (doc: Y.Doc) => void, userId: string | null): Promise<void> {
+    await this.ready;
+    const copy = new Y.Doc({ gc: false });
+    Y.applyUpdate(copy, Y.encodeStateAsUpdate(this.doc));
+    const before = Y.encodeStateVector(copy);
+    edit(copy);
+    const update = Y.encodeStateAsUpdate(copy, before);
+    copy.destroy();
+    await this.enqueue(async () => {
+      this.pending.push({ update, userId, peer: null });
+      await this.storePending();
+    });
+  }
+
   /** Stores every pending update in one statement, then applies and broadcasts them. */
   private async storePending(): Promise<void> {
     const batch = this.pending;
@@ -142,15 +165,15 @@ export class NotebookRoom {
       this.lastStoredId = await appendNotebookUpdates({
         db: this.options.db,
         notebookId: this.options.notebookId,
-        updates: batch.map(({ update, peer }) => ({ data: update, userId: peer.userId })),
+        updates: batch.map(({ update, userId }) => ({ data: update, userId })),
       });
     } catch (error) {
       // Nothing of the batch was applied or shown to anyone; the writers reconnect and
       // their sync sends the same changes again.
-      for (const peer of new Set(batch.map((b) => b.peer))) peer.close(1011, "could not store the change; reconnecting");
+      for (const peer of new Set(batch.map((b) => b.peer))) peer?.close(1011, "could not store the change; reconnecting");
       throw error;
     }
-    for (const { update, peer } of batch) Y.applyUpdate(this.doc, update, peer);
+    for (const { update, peer } of batch) Y.applyUpdate(this.doc, update, peer ?? "server");
     await this.maybeCompact();
   }
 
