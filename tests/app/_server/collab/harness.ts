@@ -18,7 +18,7 @@ export interface TestServer {
   close(): Promise<void>;
 }
 
-export async function startCollabServer(db: Db, options: { compactEvery?: number; compactAfterIdleMs?: number } = {}): Promise<TestServer> {
+export async function startCollabServer(db: Db, options: { compactEvery?: number; compactAfterIdleMs?: number; register?: boolean } = {}): Promise<TestServer> {
   const hub = createCollabHub({
     db,
     codec: notebookJsonCodec(),
