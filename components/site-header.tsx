@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { getCurrentUser } from "@/app/_server/auth";
+import { NavLink } from "@/components/nav-link";
 import { SignOutButton } from "@/components/sign-out-button";
 import { buttonClasses } from "@/components/ui/button";
 
@@ -19,15 +20,13 @@ export async function SiteHeader() {
           {user ? (
             <ul className="flex items-center gap-4 text-sm">
               <li>
-                <Link href="/dashboard" className="text-ink-soft no-underline hover:text-ink hover:underline">
-                  Dashboard
-                </Link>
+                <NavLink href="/dashboard">Dashboard</NavLink>
               </li>
               <li>
-                <Link href="/account" className="text-ink-soft no-underline hover:text-ink hover:underline">
+                <NavLink href="/account">
                   Account
                   <span className="sr-only"> ({user.email})</span>
-                </Link>
+                </NavLink>
               </li>
               <li>
                 <SignOutButton />

@@ -60,6 +60,29 @@ test("the notebooks table sorts by title on request, both ways", async ({ page }
   }).toBe(true);
 });
 
+test("the notebooks table filters and pages through the server's results", async ({ page }) => {
+  await signInAs(page, demoAccounts.author);
+  // Eleven notebooks that share a unique word: one more than the first page holds.
+  const tag = `paging${Date.now().toString(36)}`;
+  const groups = (await (await page.request.get("/api/groups")).json()) as { groups: { id: string; role: string }[] };
+  const groupId = groups.groups.find((group) => group.role === "author")!.id;
+  for (let index = 1; index <= 11; index += 1) {
+    const response = await page.request.post("/api/notebooks", { data: { groupId, title: `${tag} note ${String(index).padStart(2, "0")}` } });
+    expect(response.status()).toBe(201);
+  }
+
+  const dashboard = new DashboardPage(page);
+  await dashboard.open();
+  await dashboard.filter(tag);
+  const table = dashboard.notebooksTable();
+  await expect(page.getByText("Page 1 of 2")).toBeVisible();
+  await expect(table.getByRole("row")).toHaveCount(11); // header + 10
+  await page.getByRole("button", { name: "Next page" }).click();
+  await expect(page.getByText("Page 2 of 2")).toBeVisible();
+  await expect(table.getByRole("row")).toHaveCount(2); // header + the eleventh
+  await expect(page.getByRole("button", { name: "Next page" })).toBeDisabled();
+});
+
 test("a reader sees no way to create a notebook and the API refuses one", async ({ page }) => {
   await signInAs(page, demoAccounts.reader);
   const dashboard = new DashboardPage(page);
