@@ -3,6 +3,10 @@ import { CasRequestError } from "../check/errors";
 import type { CheckError } from "../check/protocol";
 import { checkRequestSchema, runCheck } from "./check";
 import { dimsRequestSchema, runDims } from "./dims";
+import { curvatureRequestSchema, runCurvature } from "./curvature";
+import { geodesicsRequestSchema, runGeodesics } from "./geodesics";
+import { potentialRequestSchema, runPotential } from "./potential";
+import { orbitsRequestSchema, runOrbits } from "./orbits";
 
 /**
  * The cas verbs, transport-neutral: each is a zod schema for its input and a
@@ -22,7 +26,10 @@ const verb = <S extends z.ZodType>(schema: S, handle: (input: z.infer<S>) => unk
 export const VERBS: Readonly<Record<string, Verb>> = {
   check: verb(checkRequestSchema, runCheck),
   dims: verb(dimsRequestSchema, runDims),
-  // curvature, geodesics, potential, orbits: one line each, e.g. `curvature: verb(curvatureRequestSchema, runCurvature),`
+  curvature: verb(curvatureRequestSchema, runCurvature),
+  geodesics: verb(geodesicsRequestSchema, runGeodesics),
+  potential: verb(potentialRequestSchema, runPotential),
+  orbits: verb(orbitsRequestSchema, runOrbits),
 };
 
 export type VerbName = keyof typeof VERBS;

@@ -6,6 +6,8 @@ import { differentiate, productOf } from "../calculus/differentiate";
 import { Ring } from "../simplify/algebra/ring";
 import { toRatFun } from "../simplify/algebra/from-expr";
 import { exponentsOf } from "../simplify/algebra/polynomial";
+import { rationalCandidates } from "../simplify/rational-normal";
+import { acceptIfEqual } from "../simplify/guard";
 import type { RatFun } from "../simplify/algebra/ratfun";
 
 /** A metric as given: coordinate names (plain identifiers) and the component trees g_ab, symmetric. */
@@ -41,7 +43,8 @@ export function metricFromLineElement(lineElement: Expr, coordinates: readonly s
     const first = differentiate(asSymbols, differentialVariable(coordinates[a]));
     for (let b = a; b < n; b += 1) {
       const second = differentiate(first, differentialVariable(coordinates[b]));
-      const g = substitute(productOf([num("0.5"), second]), zero);
+      // ½ ∂²/∂da∂db leaves factors like 0.5·(…·2): keep the rational normal form when the guard accepts it.
+      const g = tidy(substitute(productOf([num("0.5"), second]), zero));
       components[a][b] = g;
       components[b][a] = g;
     }
@@ -62,6 +65,12 @@ export function metricFromComponents(components: readonly (readonly Expr[])[], c
     throw new MetricError(`the components matrix must be ${n}×${n}, one row and column per coordinate`);
   }
   return { coordinates, components };
+}
+
+function tidy(e: Expr): Expr {
+  const candidates = rationalCandidates(e);
+  const best = candidates.find((c) => acceptIfEqual(e, c));
+  return best ?? e;
 }
 
 function checkCoordinates(coordinates: readonly string[]): void {
