@@ -25,12 +25,13 @@ async function main(): Promise<void> {
   await getDbHandle(); // migrations run here, before the first request
   console.info(`[server] database ready (${dbKind()})`);
 
-  // Next attaches its own upgrade listener to the server of the first request it sees.
-  // Handing it a stand-in emitter keeps the single upgrade listener below in charge.
-  const app = next({ dev, hostname, port, httpServer: new EventEmitter() as never });
+  // Next attaches its own upgrade listener (hot reload in dev) to the server of the first
+  // request it sees. Handing it a stand-in emitter keeps the single upgrade listener below
+  // in charge; in dev, upgrades outside /yjs/ are passed on to Next through the stand-in.
+  const nextUpgrades = new EventEmitter();
+  const app = next({ dev, hostname, port, httpServer: nextUpgrades as never });
   await app.prepare();
   const handle = app.getRequestHandler();
-  const nextUpgrade: UpgradeHandler = app.getUpgradeHandler();
 
   // Co-authoring: the Yjs websocket claims only YJS_PATH_PREFIX.
   const collab = createCollabHub({ db: await getDb(), codec: notebookJsonCodec(), authenticate: authenticateUpgrade, resolveAccess, register: true });
@@ -51,10 +52,15 @@ async function main(): Promise<void> {
   server.on("upgrade", (req: IncomingMessage, socket: Duplex, head: Buffer) => {
     const pathname = new URL(req.url ?? "/", "http://localhost").pathname;
     if (pathname.startsWith(YJS_PATH_PREFIX)) {
+      track(socket);
       return yjsUpgrade(req, socket, head);
     }
     // Dev: hot reload's socket. Production serves no other websockets.
-    if (dev) return nextUpgrade(req, socket, head);
+    if (dev && nextUpgrades.listenerCount("upgrade") > 0) {
+      track(socket);
+      nextUpgrades.emit("upgrade", req, socket, head);
+      return;
+    }
     socket.destroy();
   });
 
@@ -62,21 +68,25 @@ async function main(): Promise<void> {
     console.info(`[server] Vierbein ${dev ? "development" : "production"} on http://localhost:${port}`);
   });
 
+  // Upgraded sockets no longer count as requests: close() would wait for them for ever.
+  const upgraded = new Set<Duplex>();
+  const track = (socket: Duplex) => {
+    upgraded.add(socket);
+    socket.once("close", () => upgraded.delete(socket));
+  };
+
   let closing = false;
   const shutdown = (signal: string) => {
     if (closing) return;
     closing = true;
     console.info(`[server] ${signal}: closing`);
-    // Idle keep-alive connections would hold close() open; in-flight requests still finish.
-    server.closeIdleConnections();
     const forceExit = setTimeout(() => {
       console.error("[server] connections did not close in time; exiting");
-      server.closeAllConnections();
+      process.exit(1);
     }, 10_000);
     forceExit.unref();
     server.close(async () => {
       try {
-        await collab.close(); // stores what is pending before the database closes
         await app.close();
         await closeDb();
         console.info("[server] closed cleanly");
@@ -87,8 +97,18 @@ async function main(): Promise<void> {
       }
     });
   };
-  process.on("SIGTERM", () => shutdown("SIGTERM"));
-  process.on("SIGINT", () => shutdown("SIGINT"));
+  const closeSockets = async () => {
+    await collab.close(); // tells co-authors, stores what is pending before the database closes
+    for (const socket of upgraded) socket.destroy();
+    // Idle keep-alive connections would hold close() open; in-flight requests still finish.
+    server.closeIdleConnections();
+  };
+  const startShutdown = (signal: string) => {
+    if (closing) return;
+    void closeSockets().finally(() => shutdown(signal));
+  };
+  process.on("SIGTERM", () => startShutdown("SIGTERM"));
+  process.on("SIGINT", () => startShutdown("SIGINT"));
 }
 
 main().catch((error: unknown) => {
