@@ -2,7 +2,7 @@ import type Decimal from "decimal.js";
 import type { Expr } from "../expr/types";
 import { isBuiltinFunction } from "../expr/types";
 import { sym } from "../expr/build";
-import { freeVariables } from "../expr/traverse";
+import { freeVariables, mapExpr } from "../expr/traverse";
 import { decimalContext, evaluateDecimal, type DecimalContext } from "../numeric/evaluate";
 
 /**
@@ -125,4 +125,39 @@ export function probeEqual(a: Expr, b: Expr, options: ProbeOptions = {}): ProbeR
   }
   if (good < points) return { kind: "unknown", reason: `only ${good} of ${points} random points could be evaluated` };
   return { kind: "equal", points, digits };
+}
+
+const TRIG_NAME = /^(sin|cos)\(([A-Za-z][A-Za-z0-9_]*)\)$/;
+
+/**
+ * Replaces sin x and cos x of a symbol by symbols named "sin(x)", "cos(x)", so
+ * a point computes each once instead of once per tree (decimal.js sine is a
+ * Taylor series). Pair with {@link completeTrigValues}.
+ *
+ * @example
+ * freezeTrig(call("sin", sym("theta")))  // sym("sin(theta)")
+ */
+export function freezeTrig(e: Expr): Expr {
+  return mapExpr(e, (n) => (n.kind === "call" && (n.fn === "sin" || n.fn === "cos") && n.args.length === 1 && n.args[0].kind === "sym" ? sym(`${n.fn}(${n.args[0].name})`) : n));
+}
+
+/** Splits names into the free ones and the symbols the frozen sin/cos names depend on. */
+export function freeNamesOf(names: Iterable<string>): Set<string> {
+  const out = new Set<string>();
+  for (const name of names) {
+    const m = TRIG_NAME.exec(name);
+    out.add(m ? m[2] : name);
+  }
+  return out;
+}
+
+/** Adds the values of every frozen "sin(x)" / "cos(x)" name in `names`. */
+export function completeTrigValues(names: Iterable<string>, values: Record<string, Decimal>): Record<string, Decimal> {
+  for (const name of names) {
+    const m = TRIG_NAME.exec(name);
+    if (!m || values[name] !== undefined) continue;
+    const x = values[m[2]];
+    if (x !== undefined) values[name] = m[1] === "sin" ? x.sin() : x.cos();
+  }
+  return values;
 }

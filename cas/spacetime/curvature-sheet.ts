@@ -2,7 +2,8 @@ import type Decimal from "decimal.js";
 import type { Expr } from "../expr/types";
 import { exprSize } from "../expr/traverse";
 import { decimalContext, evaluateDecimal, type DecimalContext } from "../numeric/evaluate";
-import { jetify, randomSource, randomValues } from "../simplify/probe";
+import { completeTrigValues, freeNamesOf, freezeTrig, jetify, randomSource, randomValues } from "../simplify/probe";
+import { freeVariables } from "../expr/traverse";
 import { viaNerdamer } from "../simplify/nerdamer-bridge";
 import { fromRatFun } from "../simplify/algebra/to-expr";
 import { type RatFun, rfIsZero } from "../simplify/algebra/ratfun";
@@ -80,7 +81,7 @@ class Verifier {
     const raw = rawDerivatives(metric);
     const next = randomSource(11);
     for (let attempt = 0; attempt < count * 8 && this.points.length < count; attempt += 1) {
-      const values = randomValues(this.D, raw.names, next);
+      const values = completeTrigValues(raw.names, randomValues(this.D, freeNamesOf(raw.names), next));
       try {
         this.points.push({ values, raw: curvatureAtPoint(this.D, raw, values) });
       } catch { /* a pole or outside the domain: draw again */ }
@@ -90,11 +91,11 @@ class Verifier {
 
   /** Is `shown` equal to the raw value at every point? */
   agrees(shown: Expr, pick: (at: CurvatureAtPoint) => Decimal): boolean {
-    const tree = jetify(shown);
+    const tree = freezeTrig(jetify(shown));
     return this.points.every(({ values, raw }) => {
       const expected = pick(raw);
       let got: Decimal;
-      try { got = evaluateDecimal(this.D, tree, { values }); } catch { return false; }
+      try { got = evaluateDecimal(this.D, tree, { values: completeTrigValues(freeVariables(tree), values) }); } catch { return false; }
       const scale = this.D.max(1, expected.abs(), got.abs());
       return got.minus(expected).abs().lte(scale.times(new this.D(10).pow(14 - this.digits)));
     });
@@ -168,20 +169,28 @@ function* sheetStages(metric: Metric, options: CurvatureOptions): Generator<Curv
     return out;
   };
   const pairs = (fn: (a: number, b: number) => void) => { for (let a = 0; a < n; a += 1) for (let b = a; b < n; b += 1) fn(a, b); };
-  const maxOf = (xs: Decimal[]) => xs.reduce((m, x) => (x.abs().gt(m) ? x.abs() : m), xs[0].abs());
+  // The size a zero component is measured against, once per tensor and point (not per component).
+  const memo = new Map<string, Decimal>();
+  const maxOfRaw = (xs: Decimal[]) => xs.reduce((m, x) => (x.abs().gt(m) ? x.abs() : m), xs[0].abs());
+  const maxOf = (xs: () => Decimal[], key: string) => {
+    let v = memo.get(key);
+    if (v === undefined) { v = maxOfRaw(xs()); memo.set(key, v); }
+    return v;
+  };
+  const pointKey = (at: CurvatureAtPoint) => String(verifier.points.findIndex((p) => p.raw === at));
   const inverseEntries: Parameters<typeof list>[0] = [];
-  pairs((a, b) => inverseEntries.push({ index: [a, b], f: geo.ginv[a][b], pick: (at) => at.ginv[a][b], scale: (at) => maxOf(at.ginv.flat()) }));
+  pairs((a, b) => inverseEntries.push({ index: [a, b], f: geo.ginv[a][b], pick: (at) => at.ginv[a][b], scale: (at) => maxOf(() => at.ginv.flat(), `g${pointKey(at)}`) }));
   const gammaEntries: Parameters<typeof list>[0] = [];
-  for (let a = 0; a < n; a += 1) pairs((b, c) => gammaEntries.push({ index: [a, b, c], f: gamma[a][b][c], pick: (at) => at.christoffel[a][b][c], scale: (at) => maxOf(at.christoffel.flat(2)) }));
+  for (let a = 0; a < n; a += 1) pairs((b, c) => gammaEntries.push({ index: [a, b, c], f: gamma[a][b][c], pick: (at) => at.christoffel[a][b][c], scale: (at) => maxOf(() => at.christoffel.flat(2), `G${pointKey(at)}`) }));
   const riemEntries: Parameters<typeof list>[0] = [];
   for (let a = 0; a < n; a += 1) for (let b = 0; b < n; b += 1) for (let c = 0; c < n; c += 1) for (let d = c + 1; d < n; d += 1) {
-    riemEntries.push({ index: [a, b, c, d], f: riem[a][b][c][d], pick: (at) => at.riemann[a][b][c][d], scale: (at) => maxOf(at.christoffel.flat(2).map((x) => x.times(x))) });
+    riemEntries.push({ index: [a, b, c, d], f: riem[a][b][c][d], pick: (at) => at.riemann[a][b][c][d], scale: (at) => maxOf(() => at.christoffel.flat(2), `G${pointKey(at)}`).pow(2) });
   }
   const ricciEntries: Parameters<typeof list>[0] = [];
-  pairs((a, b) => ricciEntries.push({ index: [a, b], f: ric[a][b], pick: (at) => at.ricci[a][b], scale: (at) => maxOf(at.riemann.flat(3)) }));
+  pairs((a, b) => ricciEntries.push({ index: [a, b], f: ric[a][b], pick: (at) => at.ricci[a][b], scale: (at) => maxOf(() => at.riemann.flat(3), `R${pointKey(at)}`) }));
   const einsteinEntries: Parameters<typeof list>[0] = [];
-  pairs((a, b) => einsteinEntries.push({ index: [a, b], f: ein[a][b], pick: (at) => at.einstein[a][b], scale: (at) => maxOf(at.riemann.flat(3)) }));
-  const scalarOf = (f: RatFun, pick: (at: CurvatureAtPoint) => Decimal) => list([{ index: [], f, pick, scale: (at) => maxOf(at.riemann.flat(3)).pow(2) }])[0]?.expr ?? { kind: "num", value: "0" } as Expr;
+  pairs((a, b) => einsteinEntries.push({ index: [a, b], f: ein[a][b], pick: (at) => at.einstein[a][b], scale: (at) => maxOf(() => at.riemann.flat(3), `R${pointKey(at)}`) }));
+  const scalarOf = (f: RatFun, pick: (at: CurvatureAtPoint) => Decimal) => list([{ index: [], f, pick, scale: (at) => maxOf(() => at.riemann.flat(3), `R${pointKey(at)}`).pow(2) }])[0]?.expr ?? { kind: "num", value: "0" } as Expr;
 
   const sheet = {
     coordinates: metric.coordinates,

@@ -3,7 +3,7 @@ import type { Expr } from "../expr/types";
 import { freeVariables } from "../expr/traverse";
 import { differentiate } from "../calculus/differentiate";
 import { evaluateDecimal, type DecimalContext } from "../numeric/evaluate";
-import { jetify } from "../simplify/probe";
+import { freezeTrig, jetify } from "../simplify/probe";
 import type { Metric } from "./metric";
 
 /**
@@ -27,14 +27,14 @@ export interface RawDerivatives {
   readonly g: Expr[][];
   readonly dg: Expr[][][];
   readonly ddg: Expr[][][][];
-  /** Every name a point must bind (symbols and jets of undetermined functions). */
+  /** Every name a point must bind (symbols, jets of undetermined functions, frozen "sin(x)"/"cos(x)"). */
   readonly names: ReadonlySet<string>;
 }
 
 export function rawDerivatives(metric: Metric): RawDerivatives {
   const n = metric.coordinates.length;
   const names = new Set<string>();
-  const keep = (e: Expr) => { const j = jetify(e); freeVariables(j).forEach((v) => names.add(v)); return j; };
+  const keep = (e: Expr) => { const j = freezeTrig(jetify(e)); freeVariables(j).forEach((v) => names.add(v)); return j; };
   const g = metric.components.map((row) => row.map(keep));
   const first = metric.coordinates.map((c) => metric.components.map((row) => row.map((e) => differentiate(e, c))));
   const dg = first.map((layer) => layer.map((row) => row.map(keep)));

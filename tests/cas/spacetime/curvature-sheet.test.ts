@@ -7,7 +7,7 @@ import { toPlain } from "@/cas/print/plain";
 import { num, sym, mul } from "@/cas/expr/build";
 import { substitute } from "@/cas/expr/traverse";
 import { decimalContext, evaluateDecimal } from "@/cas/numeric/evaluate";
-import { jetify, probeEqual, randomSource, randomValues } from "@/cas/simplify/probe";
+import { freeNamesOf, jetify, probeEqual, randomSource, randomValues } from "@/cas/simplify/probe";
 import { computeCurvature, computeCurvatureSync, type CurvatureSheet, type TensorComponent } from "@/cas/spacetime/curvature-sheet";
 import { rawDerivatives } from "@/cas/spacetime/numeric-curvature";
 import * as M from "./metrics";
@@ -99,7 +99,7 @@ function compareWithSympy(c: M.MetricCase): void {
   const metric = M.metricOf(c);
   const sheet: CurvatureSheet = computeCurvatureSync(metric);
   const D = decimalContext(30);
-  const point = randomValues(D, rawDerivatives(metric).names, randomSource(99));
+  const point = randomValues(D, freeNamesOf(rawDerivatives(metric).names), randomSource(99));
   const run = spawnSync("python3", [SYMPY_SCRIPT], {
     input: JSON.stringify({ coordinates: c.coordinates, components: c.components, functions: c.functions ?? [], points: [Object.fromEntries(Object.entries(point).map(([k, v]) => [k, v.toString()]))] }),
     encoding: "utf8",
