@@ -76,8 +76,11 @@ class Verifier {
   private readonly D: DecimalContext;
   readonly points: { values: Record<string, Decimal>; raw: CurvatureAtPoint }[] = [];
   checked = 0;
+  /** Relative tolerance 10^(14 − digits): room for rounding in long raw sums. */
+  private readonly tolerance: Decimal;
   constructor(metric: Metric, readonly count: number, readonly digits: number) {
     this.D = decimalContext(digits);
+    this.tolerance = new this.D(10).pow(14 - digits);
     const raw = rawDerivatives(metric);
     const next = randomSource(11);
     for (let attempt = 0; attempt < count * 8 && this.points.length < count; attempt += 1) {
@@ -97,13 +100,13 @@ class Verifier {
       let got: Decimal;
       try { got = evaluateDecimal(this.D, tree, { values: completeTrigValues(freeVariables(tree), values) }); } catch { return false; }
       const scale = this.D.max(1, expected.abs(), got.abs());
-      return got.minus(expected).abs().lte(scale.times(new this.D(10).pow(14 - this.digits)));
+      return got.minus(expected).abs().lte(scale.times(this.tolerance));
     });
   }
 
   /** Is the raw value zero at every point (for a component the exact arithmetic found to be 0)? */
   vanishes(pick: (at: CurvatureAtPoint) => Decimal, scale: (at: CurvatureAtPoint) => Decimal): boolean {
-    return this.points.every(({ raw }) => pick(raw).abs().lte(this.D.max(1, scale(raw)).times(new this.D(10).pow(14 - this.digits))));
+    return this.points.every(({ raw }) => pick(raw).abs().lte(this.D.max(1, scale(raw)).times(this.tolerance)));
   }
 }
 
@@ -152,7 +155,7 @@ function* sheetStages(metric: Metric, options: CurvatureOptions): Generator<Curv
   const k = kretschmann(geo, riem, tick);
   yield finish("kretschmann");
 
-  const verifier = new Verifier(metric, options.points ?? 2, options.digits ?? 30);
+  const verifier = new Verifier(metric, options.points ?? 2, options.digits ?? 25);
   const thorough = options.thorough ?? false;
   const n = geo.n;
   const list = (entries: { index: number[]; f: RatFun; pick: (at: CurvatureAtPoint) => Decimal; scale: (at: CurvatureAtPoint) => Decimal }[]): TensorComponent[] => {
