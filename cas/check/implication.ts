@@ -7,7 +7,8 @@ import { polynomialDegree } from "./degree";
 import { decimalContext, evaluateDecimal, type DecimalContext } from "../numeric/evaluate";
 import { conditionHolds, pointSampler, type Point } from "../numeric/sample";
 import { solveFor } from "../numeric/solve";
-import { clearDifference, relativeSize, residual, zeroTolerance } from "../numeric/residual";
+import { clearDifference, relativeSize, zeroTolerance } from "../numeric/residual";
+import { claimResidual } from "./magnitude";
 import type { RandomStream } from "../numeric/random";
 
 /** How hard the probe looks: `points` sample points at `digits` significant digits. */
@@ -117,11 +118,11 @@ export function probeImplication(problem: ImplicationProblem, rng: RandomStream,
       plan = (plan + 1) % plans.length;
       continue;
     }
-    const here = point;
+    const here = snapRoundingZeros(D, problem.premises, plans[plan], point);
     if (!problem.conditions.every((c) => conditionHolds(D, c, here))) continue;
     let size: Decimal;
     try {
-      const r = residual(D, problem.claim.lhs, problem.claim.rhs, here);
+      const r = claimResidual(D, problem.claim.lhs, problem.claim.rhs, here);
       size = relativeSize(r);
       if (problem.claim.op !== "=" && problem.claim.op !== "!=") size = r.scale.isZero() ? r.value : r.value.div(r.scale);
     } catch (err) {
@@ -145,6 +146,30 @@ export function probeImplication(problem: ImplicationProblem, rng: RandomStream,
   if (found === 0 && evaluationFailure) return { verdict: "undecided", reason: `evaluation failed at every sample point (${evaluationFailure})` };
   if (found === 0) return { verdict: "undecided", reason: "no sample point satisfied the assumptions and the previous step" };
   return { verdict: "undecided", reason: `only ${found} of ${settings.points} sample points satisfied the assumptions and the previous step` };
+}
+
+/**
+ * A premise that holds at v = 0 up to rounding, solved to a tiny v, means v = 0: at
+ * r = (3GM/Λc²)^{1/3} the premise L² = μ²r²(GM − Λc²r³/3)/(…) gives L ≈ 10^-19 from a
+ * cancellation at 10^-40, and the claim L² = 0 would look false relative to L² itself.
+ * Only a variable forced tiny by cancellation is snapped; a premise such as L² = 10^-30
+ * fails at L = 0 relative to its own terms and keeps its root.
+ */
+function snapRoundingZeros(D: DecimalContext, premises: readonly Relation[], plan: readonly Plan[], point: Point): Point {
+  const tiny = new D(10).pow(-Math.floor(D.precision / 4));
+  const tolerance = zeroTolerance(D);
+  let out = point;
+  premises.forEach((p, i) => {
+    const v = plan[i].variable;
+    if (!out[v] || out[v].isZero() || out[v].abs().gt(tiny)) return;
+    const atZero = { ...out, [v]: new D(0) };
+    try {
+      if (relativeSize(claimResidual(D, p.lhs, p.rhs, atZero)).lte(tolerance)) out = atZero;
+    } catch {
+      /* keep the root */
+    }
+  });
+  return out;
 }
 
 /** For "=": the relative size of lhs − rhs; for inequalities: the signed relative size of lhs − rhs. */
