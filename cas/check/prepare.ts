@@ -1,6 +1,6 @@
 import type { Expr, Relation, Statement } from "../expr/types";
 import { dotVariable, differentialVariable, isBuiltinFunction } from "../expr/types";
-import { freeVariables, mapExpr } from "../expr/traverse";
+import { exprEquals, freeVariables, mapExpr } from "../expr/traverse";
 import { dot, mul, num, sym } from "../expr/build";
 import { differentiate } from "../calculus/differentiate";
 import { concreteFunction, type ConcreteFunction } from "../numeric/concrete-functions";
@@ -43,6 +43,9 @@ function readDefinitions(definitions: readonly Relation[]): { bindings: Map<stri
   const implicit: Relation[] = [];
   for (const d of definitions) {
     const name = d.op === "=" ? variableOf(d.lhs) : null;
+    // The same definition twice (in the context and cited for a substitution) says nothing new;
+    // kept as a constraint it would read `X = X` and leave the sampler no variable to solve for.
+    if (name !== null && bindings.has(name) && exprEquals(bindings.get(name)!, d.rhs)) continue;
     if (name !== null && !bindings.has(name)) {
       bindings.set(name, d.rhs);
       continue;
@@ -56,6 +59,19 @@ function readDefinitions(definitions: readonly Relation[]): { bindings: Map<stri
     implicit.push(d);
   }
   return { bindings, macros, implicit };
+}
+
+/**
+ * Substitutes the context's definitions (`f = 1 - r_s/r`, `V(r) = …`) into a tree, so a
+ * Lagrangian written with f is differentiated as the function of r it stands for.
+ *
+ * @example
+ * expandContextDefinitions(parsePlain("f*c^2*t_dot^2"), context) // (1 - r_s/r)*c^2*t_dot^2
+ */
+export function expandContextDefinitions(e: Expr, context: ParsedContext): Expr {
+  const { bindings, macros } = readDefinitions(context.definitions);
+  assertNotCircular(bindings);
+  return expandDefinitions(e, bindings, macros);
 }
 
 /** Throws when definitions refer to themselves through a chain (E → L → E). */
@@ -138,6 +154,37 @@ function linkDifferentials(parameter: string, moving: Set<string>): Map<string, 
   return links;
 }
 
+/** True for `X = …` where X is a compound expression (ds², dV/dr), not a name or a function `F(r)`. */
+function isRewrite(r: Relation): boolean {
+  if (r.op !== "=" || variableOf(r.lhs) !== null || r.lhs.kind === "num") return false;
+  return !(r.lhs.kind === "call" && !isBuiltinFunction(r.lhs.fn) && r.lhs.args.every((a) => a.kind === "sym"));
+}
+
+/**
+ * Substituting `ds^2 = -c^2 d\tau^2` or `dV/dr = 0` means replacing that expression where it is
+ * written. As a constraint it would ask the sampler for a real ds with ds² < 0, or share every
+ * variable with the step. A relation whose left side occurs nowhere stays a constraint.
+ */
+function applyRewrites(statements: readonly Statement[], relations: readonly Relation[]): { statements: Statement[]; unused: Relation[] } {
+  let out = [...statements];
+  const unused: Relation[] = [];
+  for (const r of relations) {
+    if (!isRewrite(r)) {
+      unused.push(r);
+      continue;
+    }
+    let hit = false;
+    const replace = (e: Expr) => mapExpr(e, (n) => {
+      if (!exprEquals(n, r.lhs)) return n;
+      hit = true;
+      return r.rhs;
+    });
+    out = out.map((s) => mapStatement(s, replace));
+    if (!hit) unused.push(r);
+  }
+  return { statements: out, unused };
+}
+
 /**
  * Turns read statements into a problem the numeric stages can sample:
  * definitions substituted, undetermined functions made concrete, derivatives
@@ -147,8 +194,9 @@ function linkDifferentials(parameter: string, moving: Set<string>): Map<string, 
  * @example
  * prepareProblem([from, to], context, rng).statements // [from', to'] over plain symbols
  */
-export function prepareProblem(statements: readonly Statement[], context: ParsedContext, rng: RandomStream, extraDefinitions: readonly Relation[] = []): PreparedProblem {
-  const { bindings, macros, implicit } = readDefinitions([...extraDefinitions, ...context.definitions]);
+export function prepareProblem(given: readonly Statement[], context: ParsedContext, rng: RandomStream, extraDefinitions: readonly Relation[] = []): PreparedProblem {
+  const { statements, unused } = applyRewrites(given, extraDefinitions);
+  const { bindings, macros, implicit } = readDefinitions([...unused, ...context.definitions]);
   assertNotCircular(bindings);
   const everything: Statement[] = [...statements, ...implicit, ...context.assumptions, ...bindings.values()];
   const moving = movingNames(everything);

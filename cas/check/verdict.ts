@@ -1,16 +1,16 @@
 import type { Expr, Relation, Statement } from "../expr/types";
 import { isBuiltinFunction } from "../expr/types";
 import { deriv, num, relation } from "../expr/build";
-import { freeVariables } from "../expr/traverse";
+import { exprEquals, freeVariables, mapExpr } from "../expr/traverse";
 import type { CheckAnswer } from "./protocol";
 import type { RandomStream } from "../numeric/random";
 import type { LimitTarget } from "../limit/probe";
 import { Undecidable } from "./errors";
-import { assertNotCircular, prepareProblem, type ParsedContext, type PreparedProblem } from "./prepare";
+import { assertNotCircular, expandContextDefinitions, prepareProblem, type ParsedContext, type PreparedProblem } from "./prepare";
 import { DEFAULT_PROBE, probeImplication, type ProbeOutcome, type ProbeSettings } from "./implication";
 import { eulerLagrange } from "./euler-lagrange";
 import { checkLimitStep } from "./limit-step";
-import { variableOf } from "./variables";
+import { mapStatement, variableOf } from "./variables";
 
 /** A justification after reading: names are plain identifiers, relations are trees. */
 export type ParsedJustification =
@@ -145,12 +145,18 @@ export function checkParsedStep(step: ParsedStep, context: ParsedContext, rng: R
         }
         return algebraic(prepareProblem([step.to], ctx, rng, [from]), false, rng, settings, `derivative by ${by}`);
       }
+      const rewritten = from.op === "=" ? derivativeOfSide(step.to, from.lhs, from.rhs, by) : null;
+      if (rewritten) {
+        // `L^2 = F(r)` gives L² as a function of r, so `d(L^2)/dr` in the new step means F'(r), not 0.
+        return algebraic(prepareProblem([rewritten], ctx, rng), false, rng, settings, `derivative by ${by}`);
+      }
       const differentiated = relation(deriv(from.lhs, by), from.op, deriv(from.rhs, by));
       return algebraic(prepareProblem([differentiated, step.to], ctx, rng), true, rng, settings, `derivative by ${by} of both sides`);
     }
     case "euler-lagrange": {
       if (!from) throw new Undecidable("an Euler–Lagrange step needs the Lagrangian as the previous step");
-      const lagrangian = from.kind === "relation" ? from.rhs : from;
+      // Defined symbols in L (f = 1 − r_s/r) depend on the coordinates: expand them before ∂L/∂r and d/dτ.
+      const lagrangian = expandContextDefinitions(from.kind === "relation" ? from.rhs : from, ctx);
       const el = eulerLagrange(lagrangian, j.coordinate, parameter, context.coordinates ?? []);
       const claim = step.to.kind === "relation" ? step.to : relation(step.to, "=", num(0));
       const problem = prepareProblem([relation(el, "=", num(0)), claim], ctx, rng);
@@ -163,13 +169,29 @@ export function checkParsedStep(step: ParsedStep, context: ParsedContext, rng: R
     }
     case "limit": {
       if (!from) throw new Undecidable("a limit step needs a previous step");
-      const problem = prepareProblem([from, step.to], ctx, rng);
+      // The limit symbol is varied on its own (r_Q → 0 with r_Q defined through Q), and the relation
+      // the limit is taken of is not rewritten by its own definition (r_ph = … would become r_ph = r_ph).
+      const kept = new Set([j.symbol, definedName(from) ?? j.symbol]);
+      const limitContext: ParsedContext = { ...ctx, definitions: ctx.definitions.filter((d) => !kept.has(definedName(d) ?? "")) };
+      const problem = prepareProblem([from, step.to], limitContext, rng);
       const out = checkLimitStep(problem, j.symbol, j.to, rng);
       if (out.verdict === "undecided") return { verdict: "undecided", method: { kind: "numeric", points: 0, digits: 80, detail: "limit probe (numeric, formal)" }, reason: out.reason };
       if (out.verdict === "refuted") return { verdict: "refuted", method: { kind: "numeric", points: 1, digits: 80, detail: out.detail }, witness: out.witness, witnessSides: { left: out.left, right: out.right } };
       return { verdict: "verified", method: { kind: "numeric", points: out.points, digits: 80, detail: out.detail } };
     }
   }
+}
+
+/** `claim` with every d(side)/d(by) replaced by d(value)/d(by), or null when it has none. */
+function derivativeOfSide(claim: Statement, side: Expr, value: Expr, by: string): Statement | null {
+  let hit = false;
+  const replace = (e: Expr) => mapExpr(e, (n) => {
+    if (n.kind !== "deriv" || n.by !== by || !exprEquals(n.of, side)) return n;
+    hit = true;
+    return { ...n, of: value };
+  });
+  const out = mapStatement(claim, replace);
+  return hit ? out : null;
 }
 
 function constantText(e: Expr): string {
