@@ -72,10 +72,25 @@ function definedSymbol(relation: string): string {
 }
 
 /**
+ * True when a substitution written in `detail` replaces the line element's left side (`ds^2`)
+ * and `previous` does not contain it: "substitute ds² = −c² dτ²" then works on the line element.
+ *
+ * @example
+ * substitutesIntoLineElement("ds^2 = -c^2\\,d\\tau^2", block, "\\frac{d}{d\\tau}(\\mu r^2\\dot\\phi) = 0") // true
+ */
+export function substitutesIntoLineElement(detail: string, block: DerivationBlock | null, previous: string): boolean {
+  const side = definedSymbol(block?.lineElement ?? "");
+  if (!side) return false;
+  const written = detail.split(/;|\n/).map(definedSymbol);
+  return written.includes(side) && !previous.replace(/\s+/g, "").includes(side);
+}
+
+/**
  * Plans the check of one step. `from` is the relation of the step it explicitly follows
  * (`follows`); otherwise of the first cited step — except for a substitution, whose cited
  * steps are what is substituted — otherwise of the previous non-definition step, and for
- * the first derived step under a block, the block's line element. `to` is the step's own
+ * the first derived step under a block, the block's line element (also for a substitution
+ * for the line element's left side, ds², when the previous step has none). `to` is the step's own
  * relation; the context is the nearest spacetime block above plus the definitions made
  * before it under that block, except definitions of declared constants through velocities
  * (constants of motion such as E and L).
@@ -108,8 +123,10 @@ export function planStepCheck(derivation: Derivation, stepId: string): StepCheck
 
   const follows = step.followsId ? byId.get(step.followsId) : undefined;
   const source = follows ?? (step.kind === "substitute" ? previous : (cited[0] ?? previous));
-  // The first derived step under a block starts from the block's line element.
-  const from = source?.relation ?? (block?.lineElement.trim() || null);
+  // The first derived step under a block starts from the block's line element, and so does a
+  // substitution for the line element's left side (ds² = −c²dτ²) when the step before has no ds².
+  const fromLineElement = !source || (!follows && step.kind === "substitute" && substitutesIntoLineElement(step.detail, block, source.relation));
+  const from = fromLineElement ? (block?.lineElement.trim() || null) : source.relation;
   if (from === null && step.kind !== "definition") {
     return { notChecked: "Nothing precedes this step: no earlier step and no line element above. Cite a step to check it against." };
   }
