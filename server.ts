@@ -10,6 +10,7 @@ import { closeDb, dbKind, getDb, getDbHandle } from "./db/client";
 import { authenticateUpgrade, resolveAccess } from "./app/_server/collab/access";
 import { COLLAB_PATH_PREFIX, createCollabHub } from "./app/_server/collab/hub";
 import { notebookJsonCodec } from "./app/_server/collab/json-codec";
+import { ensureLocalSmtpServer, stopLocalSmtpServer, usesExternalSmtp } from "./app/_server/mail";
 
 const dev = process.env.NODE_ENV !== "production";
 const port = Number(process.env.PORT || 3000);
@@ -24,6 +25,9 @@ type UpgradeHandler = (req: IncomingMessage, socket: Duplex, head: Buffer) => vo
 async function main(): Promise<void> {
   await getDbHandle(); // migrations run here, before the first request
   console.info(`[server] database ready (${dbKind()})`);
+
+  // Mail: without SMTP_URL, the mailroom's SMTP server runs here, in this process (app/_server/mail).
+  if (!usesExternalSmtp()) console.info(`[server] mailroom SMTP on ${(await ensureLocalSmtpServer()).url}`);
 
   // Next attaches its own upgrade listener (hot reload in dev) to the server of the first
   // request it sees. Handing it a stand-in emitter keeps the single upgrade listener below
@@ -88,6 +92,7 @@ async function main(): Promise<void> {
     server.close(async () => {
       try {
         await app.close();
+        await stopLocalSmtpServer(); // mail
         await closeDb();
         console.info("[server] closed cleanly");
         process.exit(0);
