@@ -11,6 +11,9 @@ import { authenticateUpgrade, resolveAccess } from "./app/_server/collab/access"
 import { COLLAB_PATH_PREFIX, createCollabHub } from "./app/_server/collab/hub";
 import { notebookJsonCodec } from "./app/_server/collab/json-codec";
 import { ensureLocalSmtpServer, stopLocalSmtpServer, usesExternalSmtp } from "./app/_server/mail";
+// [attachments + checkpoints] local S3 fake and automatic checkpoints
+import { startLocalObjectStore, type LocalObjectStore } from "./app/_server/storage/local-s3";
+import { startAutoCheckpoints } from "./app/_server/checkpoints/auto";
 
 const dev = process.env.NODE_ENV !== "production";
 const port = Number(process.env.PORT || 3000);
@@ -28,6 +31,12 @@ async function main(): Promise<void> {
 
   // Mail: without SMTP_URL, the mailroom's SMTP server runs here, in this process (app/_server/mail).
   if (!usesExternalSmtp()) console.info(`[server] mailroom SMTP on ${(await ensureLocalSmtpServer()).url}`);
+
+  // [attachments] Without S3_ENDPOINT, an S3-compatible fake (s3rver) runs in this process, storing under DATA_DIR/objects.
+  const objectStore: LocalObjectStore | null = process.env.S3_ENDPOINT ? null : await startLocalObjectStore();
+  if (objectStore) console.info(`[server] local file storage (S3 fake) on ${objectStore.config.endpoint}`);
+  // [checkpoints] An automatic checkpoint of each notebook edited and then left idle, at most one per AUTO_CHECKPOINT_MINUTES.
+  const autoCheckpoints = startAutoCheckpoints({ db: await getDb() });
 
   // Next attaches its own upgrade listener (hot reload in dev) to the server of the first
   // request it sees. Handing it a stand-in emitter keeps the single upgrade listener below
@@ -93,6 +102,8 @@ async function main(): Promise<void> {
       try {
         await app.close();
         await stopLocalSmtpServer(); // mail
+        autoCheckpoints.stop(); // [checkpoints]
+        await objectStore?.close(); // [attachments]
         await closeDb();
         console.info("[server] closed cleanly");
         process.exit(0);

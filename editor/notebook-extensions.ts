@@ -2,6 +2,7 @@ import type { AnyExtension } from "@tiptap/core";
 import StarterKit from "@tiptap/starter-kit";
 import type * as Y from "yjs";
 import { collaborationExtension, presenceExtension, type CoAuthor } from "./collaboration";
+import { Figure } from "./figure";
 import { LatexPaste } from "./latex-paste";
 import { MathDisplay } from "./math-display";
 import { MathInline } from "./math-inline";
@@ -22,11 +23,12 @@ export interface NotebookExtensionOptions {
   /** Replacements for our nodes with a view attached (the React views live in components/). */
   readonly step?: AnyExtension;
   readonly spacetimeBlock?: AnyExtension;
+  readonly figure?: AnyExtension;
 }
 
 /**
  * The complete extension list of a notebook: the starter kit (headings at levels 2–3, the
- * notebook title being level 1 on the page) plus our math, step and spacetime nodes and
+ * notebook title being level 1 on the page) plus our math, step, spacetime and figure nodes and
  * their plugins. Everything that reads a notebook's schema (tests, server export, Yjs
  * conversion) uses this list so the schema is the same everywhere.
  *
@@ -46,6 +48,7 @@ export function notebookExtensions(options: NotebookExtensionOptions = {}): AnyE
     options.step ?? Step,
     StepRef,
     options.spacetimeBlock ?? SpacetimeBlock,
+    options.figure ?? Figure,
     StepIds,
     StepNumbering,
     StepVerdicts,

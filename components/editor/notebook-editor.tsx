@@ -7,6 +7,7 @@ import { EditorContent, ReactNodeViewRenderer, useEditor, useEditorState } from 
 import { useEffect, useMemo, useState } from "react";
 import { notebookExtensions } from "@/editor/notebook-extensions";
 import { outlineOf } from "@/editor/outline";
+import { Figure } from "@/editor/figure";
 import { SpacetimeBlock } from "@/editor/spacetime-block";
 import { Step } from "@/editor/step";
 import { stepVerdictsKey, tallyVerdicts } from "@/editor/step-verdicts";
@@ -15,6 +16,7 @@ import { NotebookOutline, jumpTo } from "./notebook-outline";
 import type { NotebookEditorLoaderProps } from "./notebook-editor-loader";
 import { CoAuthorList } from "./co-author-list";
 import { LinkIndicator } from "./link-indicator";
+import { FigureView } from "./figure-view";
 import { SpacetimeBlockView } from "./spacetime-block-view";
 import { createNotebookChecker, type NotebookChecker } from "./step-checker-client";
 import { StepView } from "./step-view";
@@ -39,6 +41,7 @@ function withViews(session: Collaboration, me: { name: string; color: string }) 
         }),
     }),
     spacetimeBlock: SpacetimeBlock.extend({ addNodeView: () => ReactNodeViewRenderer(SpacetimeBlockView) }),
+    figure: Figure.extend({ addNodeView: () => ReactNodeViewRenderer(FigureView) }),
   });
 }
 
