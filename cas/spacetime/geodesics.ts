@@ -1,6 +1,6 @@
 import type { Expr } from "../expr/types";
 import { dotVariable } from "../expr/types";
-import { dot, mul, num, sym } from "../expr/build";
+import { dot, neg, num, pow, sym } from "../expr/build";
 import { exprSize, freeVariables, mapExpr, substitute } from "../expr/traverse";
 import { differentiate, productOf, sumOf } from "../calculus/differentiate";
 import { polyVar } from "../simplify/algebra/polynomial";
@@ -151,7 +151,7 @@ export function geodesics(metric: Metric, parameter = "tau"): GeodesicSystem {
     equations,
     killing,
     conserved,
-    normalisation: { timelike: hasC ? mul(num(-1), { kind: "pow", base: sym("c"), exp: num(2) }) : num(-1), null: num(0) },
+    normalisation: { timelike: hasC ? neg(pow(sym("c"), num(2))) : num(-1), null: num(0) },
   };
 }
 
