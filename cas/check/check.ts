@@ -4,6 +4,7 @@ import { hashText, randomStream } from "../numeric/random";
 import { dimensionReport, type TermPrinter } from "../dims/report";
 import { Undecidable } from "./errors";
 import { readCheckRequest } from "./read";
+import { withDefinedDimensions } from "./defined-dimensions";
 import { checkParsedStep } from "./verdict";
 import { DEFAULT_PROBE, type ProbeSettings } from "./implication";
 
@@ -31,5 +32,7 @@ export function checkStep(req: CheckRequest, settings: ProbeSettings = DEFAULT_P
   }
   const declared = [...context.dimensions.symbols.values()].some((d) => d !== null);
   if (!declared) return answer;
-  return { ...answer, dimensions: dimensionReport(step.to, context.dimensions, print) };
+  // Defined symbols (and any definition the step itself makes) take the dimension of what they stand for.
+  const definitions = [...context.parsed.definitions, ...(step.to.kind === "relation" && step.justification.kind === "definition" ? [step.to] : [])];
+  return { ...answer, dimensions: dimensionReport(step.to, withDefinedDimensions(context.dimensions, definitions), print) };
 }
