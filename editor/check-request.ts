@@ -53,7 +53,8 @@ export function toProtocolJustification(
 /**
  * The checker context of a spacetime block plus the definitions made above a step:
  * coordinates and constants become `symbols` (with their dimensions), assumptions pass
- * through, and steps justified as "definition" become `definitions`.
+ * through, and steps justified as "definition" become `definitions`. An undeclared τ is
+ * proper time, and the interval `s` of `ds^2 = …` is a length when a coordinate is one.
  *
  * @example
  * blockContext(block, ["E = \\mu c^2 \\dot t"]).symbols // { t: "time", r: "length", … }
@@ -62,6 +63,12 @@ export function blockContext(block: DerivationBlock | null, definitions: readonl
   if (!block) return { symbols: {}, definitions: [...definitions], assumptions: [] };
   const symbols: Record<string, string | null> = {};
   for (const s of [...block.coordinates, ...block.constants]) symbols[s.symbol] = s.dimension.trim() || null;
+  // Conventions the block implies without declaring: τ is proper time, and the interval s of
+  // `ds^2 = …` is measured like the spatial coordinates (c²dt² and dr² are both lengths squared).
+  if (block.parameter.trim() === "\\tau" && !(block.parameter in symbols)) symbols[block.parameter] = "time";
+  const interval = /^d\s*([a-zA-Z])\s*\^\s*\{?2\}?$/.exec(definedSymbol(block.lineElement));
+  const spatial = block.coordinates.find((c) => c.dimension.trim() === "length");
+  if (interval && spatial && !(interval[1] in symbols)) symbols[interval[1]] = "length";
   return { symbols, definitions: [...definitions], assumptions: [...block.assumptions], parameter: block.parameter };
 }
 
