@@ -13,7 +13,7 @@ export function buildVesperReissnerNordstrom(): JSONContent {
     heading(2, "Setup"),
     para(
       "Vesper-3 is an invented charged hole with ",
-      { math: "Q/M = 0.6" },
+      { math: "q = Q/M = 0.6" },
       " in geometrised units, i.e. ",
       { math: "r_Q = 0.3\\,r_s" },
       ". We study neutral test particles in its equatorial plane.",
@@ -25,16 +25,16 @@ export function buildVesperReissnerNordstrom(): JSONContent {
       lineElement: `ds^2 = -${fExplicit}c^2\\,dt^2 + ${fExplicit}^{-1}dr^2 + r^2\\left(d\\theta^2 + \\sin^2\\theta\\,d\\phi^2\\right)`,
       constants: [
         ...ORBIT_CONSTANTS,
-        // The checker's dimensions are powers of M, L and T; charge is left undeclared.
-        { symbol: "Q", dimension: "", note: "charge of the hole (SI)" },
-        { symbol: "\\varepsilon_0", dimension: "", note: "vacuum permittivity" },
+        // The checker's dimensions are powers of M, L and T, so the charge enters as the geometrised
+        // ratio q = Q/M (dimensionless) and the charge length r_Q (a length), not in coulombs.
+        { symbol: "q", dimension: "dimensionless", note: "charge-to-mass ratio Q/M in geometrised units" },
         { symbol: "r_Q", dimension: "length", note: "charge length" },
       ],
       assumptions: ["r > r_+", "\\theta = \\frac{\\pi}{2}", "r_Q < \\frac{r_s}{2}"],
       parameter: "\\tau",
     }),
     step("vr01", "r_s = \\frac{2GM}{c^2}", "definition"),
-    step("vr02", "r_Q = \\sqrt{\\frac{GQ^2}{4\\pi\\varepsilon_0 c^4}}", "definition"),
+    step("vr02", "r_Q = \\frac{qGM}{c^2}", "definition"),
     step("vr03", "f = 1 - \\frac{r_s}{r} + \\frac{r_Q^2}{r^2}", "definition"),
     step("vr04", "ds^2 = -f c^2\\,dt^2 + f^{-1}\\,dr^2 + r^2\\,d\\phi^2", "substitute", "\\theta = \\frac{\\pi}{2}; d\\theta = 0"),
 
