@@ -1,0 +1,65 @@
+// GET /api/notebooks/:id/remarks?status=open|settled|all&author=<userId> (any member)
+//   → 200 {"threads": [{"id", "anchor": {"stepId"?, "span"?: {"from", "to"}, "quote"?}, "body", "author": {"id", "name", "email"},
+//          "settled", "settledBy", "settledAt", "createdAt", "updatedAt", "replies": [{"id", "body", "author", "createdAt"}]}],
+//          "permissions": {"remark", "settle"}}
+// POST /api/notebooks/:id/remarks {"body", "anchor"} (reviewer, author or lead) → 201 {"thread"}; mails the notebook's
+//   authors and leads (not the writer)
+//   → 400 bad_request:* (also bad_request:anchor for a step id the notebook does not have), 401, 403 forbidden:notebook,
+//     404 not_found:notebook
+import type { Db } from "@/db/client";
+import { getDb } from "@/db/client";
+import { getNotebookById } from "@/db/queries/notebooks";
+import { createRemark, getRemarkThread, listRemarkThreads } from "@/db/queries/remarks";
+import type { Notebook } from "@/db/schema";
+import { can } from "@/app/_server/authz";
+import { readNotebookDocument } from "@/app/_server/collab/documents";
+import { AppError, handleRoute } from "@/app/_server/errors";
+import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { describeAnchor, notifyRemark, stepNumberOf } from "@/app/_server/mail/remark-mail";
+import { parseJsonBody, parseParams, parseSearchParams } from "@/app/_server/parse";
+import { createRemarkBody, notebookRemarksParams, remarksQuery } from "./schema";
+
+export const dynamic = "force-dynamic";
+
+type Params = { id: string };
+
+async function findNotebook(db: Db, id: string): Promise<Notebook> {
+  const notebook = await getNotebookById({ db, id });
+  if (!notebook) throw new AppError("not_found:notebook", "No notebook with that id.");
+  return notebook;
+}
+
+export const GET = handleRoute<Params>(async (request, { params }) => {
+  const { id } = await parseParams(params, notebookRemarksParams);
+  const query = parseSearchParams(request, remarksQuery);
+  const user = await requireUser();
+  const db = await getDb();
+  const notebook = await findNotebook(db, id);
+  const actor = await loadActor({ db, user });
+  const resource = { type: "notebook", groupId: notebook.groupId, notebookId: notebook.id } as const;
+  await authorize({ db, actor, action: "notebook:read", resource, request });
+  const threads = await listRemarkThreads({ db, notebookId: notebook.id, status: query.status, authorId: query.author });
+  return Response.json({
+    threads,
+    permissions: { remark: can(actor, "notebook:remark", resource), settle: can(actor, "notebook:settle-remark", resource) },
+  });
+});
+
+export const POST = handleRoute<Params>(async (request, { params }) => {
+  const { id } = await parseParams(params, notebookRemarksParams);
+  const body = await parseJsonBody(request, createRemarkBody);
+  const user = await requireUser();
+  const db = await getDb();
+  const notebook = await findNotebook(db, id);
+  const actor = await loadActor({ db, user });
+  await authorize({ db, actor, action: "notebook:remark", resource: { type: "notebook", groupId: notebook.groupId, notebookId: notebook.id }, request });
+
+  const document = await readNotebookDocument({ db, notebookId: notebook.id });
+  const stepNumber = body.anchor.stepId && document ? stepNumberOf(document.json, body.anchor.stepId) : null;
+  if (body.anchor.stepId && stepNumber === null) throw new AppError("bad_request:anchor", "This notebook has no step with that id; it may have been deleted.");
+
+  const remark = await createRemark({ db, notebookId: notebook.id, authorId: user.id, body: body.body, anchor: body.anchor });
+  await auditChange({ db, actor, action: "notebook:remark", resourceType: "remark", resourceId: remark.id, detail: { notebookId: notebook.id }, request });
+  await notifyRemark({ db, notebook, threadId: remark.id, writer: user, body: body.body, isReply: false, where: describeAnchor(body.anchor, stepNumber) });
+  return Response.json({ thread: await getRemarkThread({ db, notebookId: notebook.id, id: remark.id }) }, { status: 201 });
+});
