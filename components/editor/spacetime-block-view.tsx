@@ -5,6 +5,8 @@ import { useId, useMemo, useState, type FormEvent } from "react";
 import { renderLatex } from "@/editor/katex-render";
 import type { DeclaredSymbol, SpacetimeBlockAttributes } from "@/editor/spacetime-block";
 import { linesToList, symbolsToText, textToSymbols } from "./spacetime-block-fields";
+import { CurvatureSheet } from "@/components/spacetime/curvature-sheet";
+import { OrbitPanel } from "@/components/spacetime/orbit-panel";
 
 function Latex({ source, display = false }: { source: string; display?: boolean }) {
   const { html, error } = useMemo(() => renderLatex(source, display), [source, display]);
@@ -103,6 +105,7 @@ function SpacetimeBlockForm({ attrs, onSave, onCancel }: { attrs: SpacetimeBlock
 export function SpacetimeBlockView({ node, editor, updateAttributes, selected }: ReactNodeViewProps) {
   const attrs = node.attrs as SpacetimeBlockAttributes;
   const [editing, setEditing] = useState(false);
+  const [opened, setOpened] = useState<"curvature" | "orbits" | null>(null);
   const editable = editor.isEditable;
   return (
     <NodeViewWrapper
@@ -116,11 +119,19 @@ export function SpacetimeBlockView({ node, editor, updateAttributes, selected }:
           <p className="font-sans text-xs font-semibold uppercase tracking-wide text-accent">
             Spacetime block{attrs.name ? <span className="ml-2 normal-case tracking-normal text-ink">{attrs.name}</span> : null}
           </p>
-          {editable && !editing ? (
-            <button type="button" onClick={() => setEditing(true)} className="rounded border border-paper-edge px-2 py-0.5 font-sans text-xs hover:bg-paper">
-              Edit declarations
+          <span className="flex flex-wrap gap-2">
+            <button type="button" onClick={() => setOpened("curvature")} className="rounded border border-paper-edge px-2 py-0.5 font-sans text-xs hover:bg-paper">
+              Curvature sheet
             </button>
-          ) : null}
+            <button type="button" onClick={() => setOpened("orbits")} className="rounded border border-paper-edge px-2 py-0.5 font-sans text-xs hover:bg-paper">
+              Orbit panel
+            </button>
+            {editable && !editing ? (
+              <button type="button" onClick={() => setEditing(true)} className="rounded border border-paper-edge px-2 py-0.5 font-sans text-xs hover:bg-paper">
+                Edit declarations
+              </button>
+            ) : null}
+          </span>
         </header>
         <div className="mt-2 overflow-x-auto">
           {attrs.lineElement ? <Latex source={attrs.lineElement} display /> : <p className="font-sans text-sm italic text-ink-muted">No line element yet.</p>}
@@ -154,6 +165,8 @@ export function SpacetimeBlockView({ node, editor, updateAttributes, selected }:
             }}
           />
         ) : null}
+        {opened === "curvature" ? <CurvatureSheet block={attrs} onClose={() => setOpened(null)} /> : null}
+        {opened === "orbits" ? <OrbitPanel block={attrs} onClose={() => setOpened(null)} /> : null}
       </div>
     </NodeViewWrapper>
   );
