@@ -41,11 +41,43 @@ describe("blockContext", () => {
   it("declares coordinates and constants with dimensions, undeclared ones as null", () => {
     const derivation = extractDerivation(doc(schwarzschild));
     expect(blockContext(derivation.blocks[0], ["E = 1"])).toEqual({
-      symbols: { t: "time", r: "length", r_s: "length", c: "velocity", k: null },
+      symbols: { t: "time", r: "length", r_s: "length", c: "velocity", k: null, "\\tau": "time", s: "length" },
       definitions: ["E = 1"],
       assumptions: ["r > r_s", "\\theta = \\frac{\\pi}{2}"],
       parameter: "\\tau",
     });
+  });
+});
+
+describe("blockContext conventions", () => {
+  it("leaves a declared τ and an interval that is not ds^2 alone", () => {
+    const block = { ...extractDerivation(doc(schwarzschild)).blocks[0], lineElement: "d\\sigma^2 = …", constants: [{ symbol: "\\tau", dimension: "length" }] };
+    const symbols = blockContext(block, []).symbols!;
+    expect(symbols["\\tau"]).toBe("length");
+    expect(symbols).not.toHaveProperty("s");
+  });
+});
+
+describe("planStepCheck for a substitution into the line element", () => {
+  // Bug: Lantern's norm condition (ds² = −c²dτ² after two Euler–Lagrange steps) was checked against the φ equation.
+  const derivation = extractDerivation(
+    doc(
+      { ...schwarzschild, attrs: { ...schwarzschild.attrs, lineElement: "ds^2 = -c^2 dt^2 + dr^2" } },
+      step("st-el", "\\frac{d}{d\\tau}\\left(r^2\\dot\\phi\\right) = 0", { kind: "euler-lagrange", detail: "\\phi" }),
+      step("st-norm", "-c^2\\dot t^2 + \\dot r^2 = -c^2", { kind: "substitute", detail: "ds^2 = -c^2\\,d\\tau^2" }),
+      step("st-again", "ds^2 = -c^2\\,d\\tau^2", { kind: "algebra" }),
+      step("st-keep", "-c^2 = -c^2", { kind: "substitute", detail: "ds^2 = -c^2\\,d\\tau^2" }),
+    ),
+  );
+
+  it("starts from the line element when the previous step has no ds^2", () => {
+    const plan = planStepCheck(derivation, "st-norm");
+    expect("request" in plan && plan.request.from).toBe("ds^2 = -c^2 dt^2 + dr^2");
+  });
+
+  it("keeps the previous step when it has the ds^2 being replaced", () => {
+    const plan = planStepCheck(derivation, "st-keep");
+    expect("request" in plan && plan.request.from).toBe("ds^2 = -c^2\\,d\\tau^2");
   });
 });
 
@@ -66,7 +98,7 @@ describe("planStepCheck", () => {
     expect(planStepCheck(derivation, "st-2")).toEqual({
       request: {
         context: {
-          symbols: { t: "time", r: "length", r_s: "length", c: "velocity", k: null },
+          symbols: { t: "time", r: "length", r_s: "length", c: "velocity", k: null, "\\tau": "time", s: "length" },
           definitions: ["E = \\mu c^2\\left(1-\\frac{r_s}{r}\\right)\\dot t"],
           assumptions: ["r > r_s", "\\theta = \\frac{\\pi}{2}"],
           parameter: "\\tau",
