@@ -69,8 +69,8 @@ function assemble(content: Q, top: Expr[], den: Factors, ring: Ring): Expr {
 export function fromRatFun(ring: Ring, a: RatFun, style: "factored" | "expanded"): Expr {
   if (polyIsZero(a.num)) return num(0);
   if (style === "expanded") {
-    const content = polyContent(a.num);
-    const scale = { n: content.n < 0n ? -1n : 1n, d: content.d };
+    // Only the denominator is pulled out: the signs stay in the sum, so −(r − r_s) reads r_s − r.
+    const scale = { n: 1n, d: polyContent(a.num).d };
     return assemble(scale, [polyExpr(ring, polyScale(a.num, qInv(scale)))], a.den, ring);
   }
   const { content, factors, rest } = ring.factorize(a.num, false);
