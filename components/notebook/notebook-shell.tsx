@@ -2,6 +2,7 @@ import Link from "next/link";
 import type { ReactNode } from "react";
 import { roleLabel } from "@/components/data/roles";
 import type { Role } from "@/components/data/roles";
+import { NotebookRecords } from "./notebook-records";
 import { NotebookTitle } from "./notebook-title";
 
 export type NotebookShellProps = {
@@ -44,6 +45,7 @@ export function NotebookShell({ notebookId, title, groupId, groupName, role, rea
         </p>
       </header>
       {children}
+      <NotebookRecords notebookId={notebookId} role={role} readOnly={readOnly} />
     </div>
   );
 }

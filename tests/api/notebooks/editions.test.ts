@@ -115,8 +115,8 @@ describe("an edition never changes", () => {
     await expect(db.execute(sql`UPDATE editions SET title = 'tampered' WHERE notebook_id = ${notebookId}`)).rejects.toThrow();
     await expect(db.execute(sql`DELETE FROM editions WHERE notebook_id = ${notebookId}`)).rejects.toThrow();
     await expect(db.execute(sql`TRUNCATE editions`)).rejects.toThrow();
-    const rows = await db.execute(sql`SELECT title FROM editions WHERE notebook_id = ${notebookId}`);
-    const titles = ("rows" in rows ? rows.rows : rows) as { title: string }[];
+    const rows = (await db.execute(sql`SELECT title FROM editions WHERE notebook_id = ${notebookId}`)) as unknown as { rows: { title: string }[] };
+    const titles = rows.rows;
     expect(titles.map((r) => r.title)).toEqual(["Vesper-3 orbits", "Vesper-3 orbits"]);
   });
 });

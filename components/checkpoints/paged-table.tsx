@@ -1,0 +1,146 @@
+"use client";
+
+import {
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getPaginationRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnDef,
+  type ColumnFiltersState,
+  type SortingState,
+} from "@tanstack/react-table";
+import { useId, useState, type ReactNode } from "react";
+import { Button } from "@/components/ui/button";
+
+/**
+ * A table over a list already in the browser (a notebook's checkpoints or editions are few):
+ * sortable by header, filtered by free text and by the `filters` the caller draws, paged.
+ */
+export function PagedTable<Row>({
+  caption,
+  data,
+  columns,
+  initialSort,
+  searchLabel,
+  filters,
+  columnFilters,
+  emptyText,
+  pageSize = 8,
+}: {
+  caption: string;
+  data: Row[];
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- TanStack's column values are heterogeneous
+  columns: ColumnDef<Row, any>[];
+  initialSort: SortingState;
+  searchLabel: string;
+  filters?: ReactNode;
+  columnFilters?: ColumnFiltersState;
+  emptyText: string;
+  pageSize?: number;
+}) {
+  const searchId = useId();
+  const [sorting, setSorting] = useState<SortingState>(initialSort);
+  const [globalFilter, setGlobalFilter] = useState("");
+  const table = useReactTable({
+    data,
+    columns,
+    state: { sorting, globalFilter, columnFilters: columnFilters ?? [] },
+    onSortingChange: setSorting,
+    onGlobalFilterChange: setGlobalFilter,
+    globalFilterFn: "includesString",
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+    getPaginationRowModel: getPaginationRowModel(),
+    initialState: { pagination: { pageIndex: 0, pageSize } },
+    autoResetPageIndex: true,
+  });
+  const rows = table.getRowModel().rows;
+  const total = table.getFilteredRowModel().rows.length;
+  const { pageIndex } = table.getState().pagination;
+
+  return (
+    <div className="space-y-2">
+      <div className="flex flex-wrap items-end gap-3">
+        <div className="flex flex-col gap-1">
+          <label htmlFor={searchId} className="text-xs font-medium text-ink-soft">
+            {searchLabel}
+          </label>
+          <input
+            id={searchId}
+            type="search"
+            value={globalFilter}
+            onChange={(event) => setGlobalFilter(event.target.value)}
+            className="rounded-md border border-paper-edge bg-white/70 px-2 py-1 text-sm"
+          />
+        </div>
+        {filters}
+      </div>
+      <div className="overflow-x-auto">
+        <table className="w-full text-left text-sm">
+          <caption className="sr-only">{caption}</caption>
+          <thead className="border-b border-paper-edge text-ink-soft">
+            {table.getHeaderGroups().map((group) => (
+              <tr key={group.id}>
+                {group.headers.map((header) => {
+                  const sorted = header.column.getIsSorted();
+                  return (
+                    <th
+                      key={header.id}
+                      scope="col"
+                      className="py-1.5 pr-3 font-medium"
+                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
+                    >
+                      {header.column.getCanSort() ? (
+                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1">
+                          {flexRender(header.column.columnDef.header, header.getContext())}
+                          <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
+                        </button>
+                      ) : (
+                        flexRender(header.column.columnDef.header, header.getContext())
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {rows.length === 0 ? (
+              <tr>
+                <td colSpan={columns.length} className="py-3 text-ink-muted">
+                  {emptyText}
+                </td>
+              </tr>
+            ) : (
+              rows.map((row) => (
+                <tr key={row.id} className="border-b border-paper-edge last:border-b-0 align-top">
+                  {row.getVisibleCells().map((cell) => (
+                    <td key={cell.id} className="py-1.5 pr-3">
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </td>
+                  ))}
+                </tr>
+              ))
+            )}
+          </tbody>
+        </table>
+      </div>
+      {total > table.getState().pagination.pageSize && (
+        <div className="flex items-center gap-2 text-xs">
+          <Button tone="quiet" className="!px-2 !py-1" disabled={!table.getCanPreviousPage()} onClick={() => table.previousPage()}>
+            Earlier page
+          </Button>
+          <span>
+            Page {pageIndex + 1} of {table.getPageCount()} ({total} rows)
+          </span>
+          <Button tone="quiet" className="!px-2 !py-1" disabled={!table.getCanNextPage()} onClick={() => table.nextPage()}>
+            Later page
+          </Button>
+        </div>
+      )}
+    </div>
+  );
+}
