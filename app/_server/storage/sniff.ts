@@ -28,7 +28,6 @@ function isPlainText(bytes: Uint8Array): boolean {
   } catch {
     return false;
   }
-  // eslint-disable-next-line no-control-regex -- control characters are exactly what is refused
   if (/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(text)) return false;
   // Scripts start with "#!"; a renamed script is not data, whatever it is called.
   return !text.startsWith("#!");

@@ -57,7 +57,6 @@ export async function readUploadedFile(request: Request): Promise<{ name: string
 /** A file name safe to show and to put in a download header: no paths, no control characters. */
 export function cleanFileName(name: string, extension: string): string {
   const base = name.split(/[\\/]/).pop() ?? "";
-  // eslint-disable-next-line no-control-regex -- control characters are what is removed
   const cleaned = base.replace(/[\u0000-\u001f\u007f"]/g, "").trim().slice(0, 200) || "attachment";
   // The stored name carries the sniffed type's extension, whatever the upload was called.
   const stem = cleaned.replace(/\.[A-Za-z0-9]{1,8}$/, "");
