@@ -106,7 +106,7 @@ export async function sendEditionPublishedMail({
   notebookId,
   number,
   publishedBy,
-  permalink = `/notebooks/${notebookId}/editions/${number}`,
+  permalink = `/editions/${notebookId}/${number}`,
 }: {
   db: Db;
   notebookId: string;
