@@ -24,6 +24,7 @@ import { useCollaboration, type Collaboration } from "./use-collaboration";
 import { colorForUser } from "@/editor/collaboration";
 import { useStepChecks } from "./use-step-checks";
 import { VerdictSummary } from "./verdict-summary";
+import { RemarksPanel, RemarksProvider } from "@/components/remarks/remarks-panel";
 
 function withViews(session: Collaboration, me: { name: string; color: string }) {
   return notebookExtensions({
@@ -53,16 +54,18 @@ export function NotebookEditor({ notebookId, readOnly, title, me }: NotebookEdit
   const myself = useMemo(() => ({ name: me.name || me.email, color: colorForUser(me.id) }), [me.id, me.name, me.email]);
   const session = useCollaboration(notebookId, myself);
   if (!session) return <p role="status" className="py-12 text-sm text-ink-muted">Opening the notebook…</p>;
-  return <SharedNotebookEditor session={session} readOnly={readOnly} title={title} myself={myself} />;
+  return <SharedNotebookEditor notebookId={notebookId} session={session} readOnly={readOnly} title={title} myself={myself} />;
 }
 
 /** The editor bound to an open shared document (see {@link useCollaboration}). */
 function SharedNotebookEditor({
+  notebookId,
   session,
   readOnly,
   title,
   myself,
 }: {
+  notebookId: string;
   session: Collaboration;
   readOnly: boolean;
   title?: string;
@@ -119,39 +122,45 @@ function SharedNotebookEditor({
   const firstRefuted = view.outline.find((entry) => entry.kind === "step" && entry.verdict === "refuted");
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[12rem_minmax(0,1fr)]">
-      <nav aria-label="Outline" className="lg:sticky lg:top-4 lg:max-h-[calc(100vh-2rem)] lg:self-start lg:overflow-y-auto">
-        <details className="lg:hidden">
-          <summary className="cursor-pointer font-sans text-sm font-medium text-ink-soft">Outline</summary>
-          <div className="mt-2">
+    // Remarks: the side list beside the text on very wide screens, below it otherwise.
+    <RemarksProvider notebookId={notebookId} editor={editor}>
+      <div className="grid gap-6 lg:grid-cols-[12rem_minmax(0,1fr)] 2xl:grid-cols-[12rem_minmax(0,1fr)_22rem]">
+        <nav aria-label="Outline" className="lg:sticky lg:top-4 lg:max-h-[calc(100vh-2rem)] lg:self-start lg:overflow-y-auto">
+          <details className="lg:hidden">
+            <summary className="cursor-pointer font-sans text-sm font-medium text-ink-soft">Outline</summary>
+            <div className="mt-2">
+              <NotebookOutline editor={editor} entries={view.outline} />
+            </div>
+          </details>
+          <div className="hidden lg:block">
+            <p className="mb-1 font-sans text-xs font-semibold uppercase tracking-wide text-ink-muted">Outline</p>
             <NotebookOutline editor={editor} entries={view.outline} />
           </div>
-        </details>
-        <div className="hidden lg:block">
-          <p className="mb-1 font-sans text-xs font-semibold uppercase tracking-wide text-ink-muted">Outline</p>
-          <NotebookOutline editor={editor} entries={view.outline} />
-        </div>
-      </nav>
+        </nav>
 
-      <div className="min-w-0">
-        <div className="sticky top-0 z-10 -mx-2 mb-4 space-y-2 border-b border-paper-edge bg-paper/95 px-2 py-2 backdrop-blur">
-          <div className="flex flex-wrap items-center justify-between gap-2">
-            <VerdictSummary
-              tally={view.tally}
-              probabilistic={view.probabilistic}
-              onJumpToRefuted={firstRefuted ? () => jumpTo(editor, firstRefuted.pos) : null}
-            />
-            <div className="flex flex-col items-end gap-1">
-              {locked ? <p className="font-sans text-xs text-ink-muted">Read-only: you can read and follow the verdicts.</p> : null}
-              <LinkIndicator link={session.link} readOnly={locked} />
+        <div className="min-w-0">
+          <div className="sticky top-0 z-10 -mx-2 mb-4 space-y-2 border-b border-paper-edge bg-paper/95 px-2 py-2 backdrop-blur">
+            <div className="flex flex-wrap items-center justify-between gap-2">
+              <VerdictSummary
+                tally={view.tally}
+                probabilistic={view.probabilistic}
+                onJumpToRefuted={firstRefuted ? () => jumpTo(editor, firstRefuted.pos) : null}
+              />
+              <div className="flex flex-col items-end gap-1">
+                {locked ? <p className="font-sans text-xs text-ink-muted">Read-only: you can read and follow the verdicts.</p> : null}
+                <LinkIndicator link={session.link} readOnly={locked} />
+              </div>
             </div>
+            <CoAuthorList coAuthors={session.coAuthors} />
+            {!locked ? <EditorToolbar editor={editor} /> : null}
           </div>
-          <CoAuthorList coAuthors={session.coAuthors} />
-          {!locked ? <EditorToolbar editor={editor} /> : null}
-        </div>
 
-        <EditorContent editor={editor} />
+          <EditorContent editor={editor} />
+        </div>
+        <div className="lg:col-start-2 2xl:col-start-3 2xl:sticky 2xl:top-4 2xl:max-h-[calc(100vh-2rem)] 2xl:self-start 2xl:overflow-y-auto">
+          <RemarksPanel canRequestReview={!locked} />
+        </div>
       </div>
-    </div>
+    </RemarksProvider>
   );
 }

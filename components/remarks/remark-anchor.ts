@@ -1,12 +1,15 @@
 import type { Node as PMNode } from "@tiptap/pm/model";
 import type { EditorState } from "@tiptap/pm/state";
 import { absolutePositionToRelativePosition, relativePositionToAbsolutePosition, ySyncPluginKey } from "@tiptap/y-tiptap";
-import { fromBase64, toBase64 } from "lib0/buffer";
 import * as Y from "yjs";
 
 // Remark anchors. A span is kept as two Yjs relative positions, which name characters of
 // the shared text rather than offsets, so the span follows its words when co-authors type
 // before it or inside it; if its text is deleted, it collapses and resolves to nothing.
+
+// atob/btoa exist in browsers and in Node ≥ 16, so the same code runs in the editor and in tests.
+const toBase64 = (bytes: Uint8Array) => btoa(String.fromCharCode(...bytes));
+const fromBase64 = (text: string) => Uint8Array.from(atob(text), (c) => c.charCodeAt(0));
 
 /** A span as the API stores it: Yjs relative positions, base64. */
 export type SpanAnchor = { from: string; to: string };

@@ -1,0 +1,183 @@
+"use client";
+
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getPaginationRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnFiltersState,
+  type SortingState,
+} from "@tanstack/react-table";
+import { useMemo, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { SelectField } from "@/components/ui/select-field";
+
+/** One thread as a row of the side list. */
+export type RemarkRow = {
+  id: string;
+  /** Step number for sorting by place in the text; text-only spans sort last. */
+  order: number;
+  where: string;
+  excerpt: string;
+  authorId: string;
+  authorName: string;
+  status: "open" | "settled";
+  replies: number;
+  updatedAt: string;
+};
+
+const column = createColumnHelper<RemarkRow>();
+const shortTime = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" });
+
+const PAGE_SIZE = 8;
+
+/**
+ * The side list of remark threads: filter by open/settled and by who started a thread,
+ * sort by place in the text, author, status or last activity, eight to a page. All in the
+ * browser: a notebook has tens of threads, not thousands.
+ */
+export function RemarksTable({ rows, selectedId, onOpen }: { rows: RemarkRow[]; selectedId: string | null; onOpen: (id: string) => void }) {
+  const [sorting, setSorting] = useState<SortingState>([{ id: "where", desc: false }]);
+  const [filters, setFilters] = useState<ColumnFiltersState>([{ id: "status", value: "open" }]);
+  const [pagination, setPagination] = useState({ pageIndex: 0, pageSize: PAGE_SIZE });
+
+  const columns = useMemo(
+    () => [
+      column.accessor("order", {
+        id: "where",
+        header: "Where",
+        cell: (info) => info.row.original.where,
+      }),
+      column.accessor("excerpt", {
+        id: "remark",
+        header: "Remark",
+        enableSorting: false,
+        cell: (info) => (
+          <button type="button" onClick={() => onOpen(info.row.original.id)} className="text-left underline-offset-2 hover:underline">
+            {info.getValue()}
+            <span className="sr-only">, open the thread</span>
+            {info.row.original.replies > 0 ? <span className="block text-xs text-ink-muted">{info.row.original.replies} repl{info.row.original.replies === 1 ? "y" : "ies"}</span> : null}
+          </button>
+        ),
+      }),
+      column.accessor("authorName", { id: "author", header: "By", filterFn: (row, _id, value: string) => !value || row.original.authorId === value }),
+      column.accessor("status", { id: "status", header: "Status", filterFn: (row, _id, value: string) => !value || value === "all" || row.original.status === value }),
+      column.accessor("updatedAt", {
+        id: "updatedAt",
+        header: "Last activity",
+        cell: (info) => <time dateTime={info.getValue()}>{shortTime.format(new Date(info.getValue()))}</time>,
+      }),
+    ],
+    [onOpen],
+  );
+
+  const table = useReactTable({
+    data: rows,
+    columns,
+    state: { sorting, columnFilters: filters, pagination },
+    onSortingChange: setSorting,
+    onColumnFiltersChange: (updater) => {
+      setFilters(updater);
+      setPagination((current) => ({ ...current, pageIndex: 0 }));
+    },
+    onPaginationChange: setPagination,
+    enableSortingRemoval: false,
+    getCoreRowModel: getCoreRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getPaginationRowModel: getPaginationRowModel(),
+  });
+
+  const authors = [...new Map(rows.map((row) => [row.authorId, row.authorName])).entries()].sort((a, b) => a[1].localeCompare(b[1]));
+  const filterValue = (id: string) => (filters.find((f) => f.id === id)?.value as string | undefined) ?? "";
+  const setFilter = (id: string, value: string) => table.getColumn(id)?.setFilterValue(value || undefined);
+  const shown = table.getFilteredRowModel().rows.length;
+
+  return (
+    <div className="space-y-2">
+      <div className="grid grid-cols-2 gap-2">
+        <SelectField
+          label="Show"
+          value={filterValue("status") || "all"}
+          onChange={(event) => setFilter("status", event.target.value)}
+          options={[
+            { value: "open", label: "open remarks" },
+            { value: "settled", label: "settled remarks" },
+            { value: "all", label: "all remarks" },
+          ]}
+        />
+        <SelectField
+          label="Started by"
+          value={filterValue("author")}
+          onChange={(event) => setFilter("author", event.target.value)}
+          options={[{ value: "", label: "anyone" }, ...authors.map(([id, name]) => ({ value: id, label: name }))]}
+        />
+      </div>
+      <p role="status" className="text-xs text-ink-muted">
+        {shown} thread{shown === 1 ? "" : "s"} shown of {rows.length}
+      </p>
+      <div className="overflow-x-auto rounded border border-paper-edge bg-white/60">
+        <table className="w-full text-left text-xs">
+          <caption className="sr-only">Remark threads on this notebook</caption>
+          <thead className="border-b border-paper-edge bg-paper-deep text-ink-soft">
+            {table.getHeaderGroups().map((group) => (
+              <tr key={group.id}>
+                {group.headers.map((header) => {
+                  const sorted = header.column.getIsSorted();
+                  const label = flexRender(header.column.columnDef.header, header.getContext());
+                  return (
+                    <th key={header.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined} className="whitespace-nowrap px-2 py-1.5 font-medium">
+                      {header.column.getCanSort() ? (
+                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-0.5 hover:text-ink">
+                          {label}
+                          <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
+                          <span className="sr-only">{sorted ? `, sorted ${sorted === "asc" ? "ascending" : "descending"}` : ", not sorted"}</span>
+                        </button>
+                      ) : (
+                        label
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id} aria-selected={row.original.id === selectedId} className="border-b border-paper-edge align-top last:border-b-0 aria-selected:bg-accent-wash">
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className="px-2 py-1.5">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+            {shown === 0 && (
+              <tr>
+                <td colSpan={columns.length} className="px-2 py-4 text-center text-ink-muted">
+                  {rows.length === 0 ? "No remarks yet." : "No thread matches these filters."}
+                </td>
+              </tr>
+            )}
+          </tbody>
+        </table>
+      </div>
+      {table.getPageCount() > 1 && (
+        <nav aria-label="Remark pages" className="flex items-center justify-between text-xs">
+          <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
+            Previous page
+          </Button>
+          <span>
+            Page {pagination.pageIndex + 1} of {table.getPageCount()}
+          </span>
+          <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
+            Next page
+          </Button>
+        </nav>
+      )}
+    </div>
+  );
+}
