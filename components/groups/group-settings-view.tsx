@@ -8,6 +8,7 @@ import { PageHeading } from "@/components/ui/page-heading";
 import { Panel } from "@/components/ui/panel";
 import { AddMemberForm } from "./add-member-form";
 import { MembersTable } from "./members-table";
+import { PendingInvitations } from "./pending-invitations";
 
 export function GroupSettingsView({ groupId, currentUserId }: { groupId: string; currentUserId: string }) {
   const group = useGroup(groupId);
@@ -51,10 +52,15 @@ export function GroupSettingsView({ groupId, currentUserId }: { groupId: string;
         {isLead && (
           <Panel title="Add a member" id="add-member-title">
             <p className="mb-3 text-sm text-ink-soft">
-              The person needs a Vierbein account. Group leads manage members and publish; authors write; reviewers read and
-              leave remarks; readers read.
+              Someone with a Vierbein account joins at once; anyone else is e-mailed an invitation link that makes their account.
+              Group leads manage members and publish; authors write; reviewers read and leave remarks; readers read.
             </p>
             <AddMemberForm groupId={groupId} />
+          </Panel>
+        )}
+        {isLead && (
+          <Panel title="Invitations" id="invitations-title">
+            <PendingInvitations groupId={groupId} />
           </Panel>
         )}
       </div>

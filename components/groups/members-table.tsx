@@ -1,5 +1,17 @@
 "use client";
 
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getPaginationRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnFiltersState,
+  type SortingState,
+} from "@tanstack/react-table";
+import { useId, useMemo, useState } from "react";
 import { useChangeRole, useRemoveMember } from "@/components/data/queries";
 import { roleLabel, roleLabels, roles, type Role } from "@/components/data/roles";
 import type { Member } from "@/components/data/types";
@@ -7,7 +19,15 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
 
-/** Members with their roles; a group lead can change a role or remove someone, everyone else only reads. */
+const column = createColumnHelper<Member>();
+const roleOrder: Record<Role, number> = { lead: 0, author: 1, reviewer: 2, reader: 3 };
+const PAGE_SIZE = 10;
+
+/**
+ * Members with their roles: filter by name or address and by role, sort by any column,
+ * ten to a page (in the browser; a group has tens of members). A group lead can change a
+ * role or remove someone; everyone else only reads.
+ */
 export function MembersTable({
   groupId,
   members,
@@ -19,69 +39,181 @@ export function MembersTable({
   manage: boolean;
   currentUserId: string;
 }) {
+  const searchId = useId();
   const changeRole = useChangeRole(groupId);
   const removeMember = useRemoveMember(groupId);
   const failure = changeRole.error ?? removeMember.error;
+  const [sorting, setSorting] = useState<SortingState>([{ id: "name", desc: false }]);
+  const [filters, setFilters] = useState<ColumnFiltersState>([]);
+  const [pagination, setPagination] = useState({ pageIndex: 0, pageSize: PAGE_SIZE });
+
+  const columns = useMemo(() => {
+    const whoOf = (member: Member) => member.name || member.email;
+    return [
+      column.accessor((member) => whoOf(member), {
+        id: "name",
+        header: "Name",
+        // The text filter searches name and address together.
+        filterFn: (row, _id, value: string) => `${row.original.name} ${row.original.email}`.toLowerCase().includes(value.toLowerCase()),
+        cell: (info) => (
+          <>
+            {info.getValue()}
+            {info.row.original.userId === currentUserId && <span className="text-ink-muted"> (you)</span>}
+          </>
+        ),
+      }),
+      column.accessor("email", { id: "email", header: "E-mail", cell: (info) => <span className="text-ink-soft">{info.getValue()}</span> }),
+      column.accessor("role", {
+        id: "role",
+        header: "Role",
+        sortingFn: (a, b) => roleOrder[a.original.role] - roleOrder[b.original.role],
+        filterFn: (row, _id, value: string) => !value || row.original.role === value,
+        cell: (info) => {
+          const member = info.row.original;
+          return manage ? (
+            <SelectField
+              label={`Role of ${whoOf(member)}`}
+              hideLabel
+              value={member.role}
+              disabled={changeRole.isPending}
+              onChange={(event) => changeRole.mutate({ userId: member.userId, role: event.target.value as Role })}
+              options={roles.map((role) => ({ value: role, label: roleLabels[role] }))}
+            />
+          ) : (
+            roleLabel(member.role)
+          );
+        },
+      }),
+      ...(manage
+        ? [
+            column.display({
+              id: "actions",
+              header: () => <span className="sr-only">Actions</span>,
+              cell: (info) => {
+                const who = whoOf(info.row.original);
+                return (
+                  <Button
+                    tone="danger"
+                    className="py-1"
+                    disabled={removeMember.isPending}
+                    onClick={() => {
+                      if (window.confirm(`Remove ${who} from the group?`)) removeMember.mutate(info.row.original.userId);
+                    }}
+                  >
+                    Remove<span className="sr-only"> {who}</span>
+                  </Button>
+                );
+              },
+            }),
+          ]
+        : []),
+    ];
+  }, [manage, currentUserId, changeRole, removeMember]);
+
+  const table = useReactTable({
+    data: members,
+    columns,
+    state: { sorting, columnFilters: filters, pagination },
+    onSortingChange: setSorting,
+    onColumnFiltersChange: (updater) => {
+      setFilters(updater);
+      setPagination((current) => ({ ...current, pageIndex: 0 }));
+    },
+    onPaginationChange: setPagination,
+    enableSortingRemoval: false,
+    getCoreRowModel: getCoreRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getPaginationRowModel: getPaginationRowModel(),
+  });
+  const filterOf = (id: string) => (filters.find((f) => f.id === id)?.value as string | undefined) ?? "";
+  const shown = table.getFilteredRowModel().rows.length;
 
   return (
     <div className="space-y-3">
       {failure && <Notice kind="problem">{failure.message}</Notice>}
+      <div className="flex flex-wrap items-end gap-3">
+        <div className="flex flex-col gap-1">
+          <label htmlFor={searchId} className="text-sm font-medium">
+            Filter members by name or e-mail
+          </label>
+          <input
+            id={searchId}
+            type="search"
+            value={filterOf("name")}
+            onChange={(event) => table.getColumn("name")?.setFilterValue(event.target.value || undefined)}
+            className="w-64 rounded-md border border-paper-edge bg-white/70 px-3 py-2"
+          />
+        </div>
+        <SelectField
+          label="Only the role"
+          value={filterOf("role")}
+          onChange={(event) => table.getColumn("role")?.setFilterValue(event.target.value || undefined)}
+          options={[{ value: "", label: "any role" }, ...roles.map((role) => ({ value: role, label: roleLabels[role] }))]}
+        />
+        <p role="status" className="text-sm text-ink-muted">
+          {shown} of {members.length} member{members.length === 1 ? "" : "s"}
+        </p>
+      </div>
       <div className="overflow-x-auto">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Members of the group and their roles</caption>
           <thead className="border-b border-paper-edge text-ink-soft">
-            <tr>
-              <th scope="col" className="py-2 pr-4 font-medium">Name</th>
-              <th scope="col" className="py-2 pr-4 font-medium">E-mail</th>
-              <th scope="col" className="py-2 pr-4 font-medium">Role</th>
-              {manage && <th scope="col" className="py-2 font-medium"><span className="sr-only">Actions</span></th>}
-            </tr>
+            {table.getHeaderGroups().map((group) => (
+              <tr key={group.id}>
+                {group.headers.map((header) => {
+                  const sorted = header.column.getIsSorted();
+                  const label = flexRender(header.column.columnDef.header, header.getContext());
+                  return (
+                    <th key={header.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined} className="py-2 pr-4 font-medium">
+                      {header.column.getCanSort() ? (
+                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-ink">
+                          {label}
+                          <span aria-hidden="true" className="text-xs">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
+                          <span className="sr-only">{sorted ? `, sorted ${sorted === "asc" ? "ascending" : "descending"}` : ", not sorted"}</span>
+                        </button>
+                      ) : (
+                        label
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
           </thead>
           <tbody>
-            {members.map((member) => {
-              const who = member.name || member.email;
-              const isSelf = member.userId === currentUserId;
-              return (
-                <tr key={member.userId} className="border-b border-paper-edge last:border-b-0">
-                  <td className="py-2 pr-4">
-                    {who}
-                    {isSelf && <span className="text-ink-muted"> (you)</span>}
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id} className="border-b border-paper-edge last:border-b-0">
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className={`py-2 pr-4 ${cell.column.id === "actions" ? "text-right" : ""}`}>
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
-                  <td className="py-2 pr-4 text-ink-soft">{member.email}</td>
-                  <td className="py-2 pr-4">
-                    {manage ? (
-                      <SelectField
-                        label={`Role of ${who}`}
-                        hideLabel
-                        value={member.role}
-                        disabled={changeRole.isPending}
-                        onChange={(event) => changeRole.mutate({ userId: member.userId, role: event.target.value as Role })}
-                        options={roles.map((role) => ({ value: role, label: roleLabels[role] }))}
-                      />
-                    ) : (
-                      roleLabel(member.role)
-                    )}
-                  </td>
-                  {manage && (
-                    <td className="py-2 text-right">
-                      <Button
-                        tone="danger"
-                        className="py-1"
-                        disabled={removeMember.isPending}
-                        onClick={() => {
-                          if (window.confirm(`Remove ${who} from the group?`)) removeMember.mutate(member.userId);
-                        }}
-                      >
-                        Remove<span className="sr-only"> {who}</span>
-                      </Button>
-                    </td>
-                  )}
-                </tr>
-              );
-            })}
+                ))}
+              </tr>
+            ))}
+            {shown === 0 && (
+              <tr>
+                <td colSpan={columns.length} className="py-4 text-center text-ink-muted">
+                  No member matches these filters.
+                </td>
+              </tr>
+            )}
           </tbody>
         </table>
       </div>
+      {table.getPageCount() > 1 && (
+        <nav aria-label="Member pages" className="flex items-center justify-between text-sm">
+          <Button tone="quiet" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
+            Previous page
+          </Button>
+          <span>
+            Page {pagination.pageIndex + 1} of {table.getPageCount()}
+          </span>
+          <Button tone="quiet" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
+            Next page
+          </Button>
+        </nav>
+      )}
     </div>
   );
 }
