@@ -5,8 +5,12 @@ import { useId, useMemo, useState, type FormEvent } from "react";
 import { renderLatex } from "@/editor/katex-render";
 import type { DeclaredSymbol, SpacetimeBlockAttributes } from "@/editor/spacetime-block";
 import { linesToList, symbolsToText, textToSymbols } from "./spacetime-block-fields";
-import { CurvatureSheet } from "@/components/spacetime/curvature-sheet";
-import { OrbitPanel } from "@/components/spacetime/orbit-panel";
+import dynamic from "next/dynamic";
+
+// The sheet and the panel bring the chart library and the spacetime toolkit; they load
+// when first opened so the notebook itself opens without them.
+const CurvatureSheet = dynamic(() => import("@/components/spacetime/curvature-sheet").then((m) => m.CurvatureSheet), { ssr: false });
+const OrbitPanel = dynamic(() => import("@/components/spacetime/orbit-panel").then((m) => m.OrbitPanel), { ssr: false });
 
 function Latex({ source, display = false }: { source: string; display?: boolean }) {
   const { html, error } = useMemo(() => renderLatex(source, display), [source, display]);
