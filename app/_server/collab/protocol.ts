@@ -36,29 +36,17 @@ export function decodeClientMessage(data: Uint8Array): ClientMessage {
   }
 }
 
-export function encodeSyncStep1(stateVector: Uint8Array): Uint8Array {
+function encodeSync(syncType: number, payload: Uint8Array): Uint8Array {
   const encoder = encoding.createEncoder();
   encoding.writeVarUint(encoder, MESSAGE_SYNC);
-  encoding.writeVarUint(encoder, syncProtocol.messageYjsSyncStep1);
-  encoding.writeVarUint8Array(encoder, stateVector);
+  encoding.writeVarUint(encoder, syncType);
+  encoding.writeVarUint8Array(encoder, payload);
   return encoding.toUint8Array(encoder);
 }
 
-export function encodeSyncStep2(diff: Uint8Array): Uint8Array {
-  const encoder = encoding.createEncoder();
-  encoding.writeVarUint(encoder, MESSAGE_SYNC);
-  encoding.writeVarUint(encoder, syncProtocol.messageYjsSyncStep2);
-  encoding.writeVarUint8Array(encoder, diff);
-  return encoding.toUint8Array(encoder);
-}
-
-export function encodeUpdate(update: Uint8Array): Uint8Array {
-  const encoder = encoding.createEncoder();
-  encoding.writeVarUint(encoder, MESSAGE_SYNC);
-  encoding.writeVarUint(encoder, syncProtocol.messageYjsUpdate);
-  encoding.writeVarUint8Array(encoder, update);
-  return encoding.toUint8Array(encoder);
-}
+export const encodeSyncStep1 = (stateVector: Uint8Array) => encodeSync(syncProtocol.messageYjsSyncStep1, stateVector);
+export const encodeSyncStep2 = (diff: Uint8Array) => encodeSync(syncProtocol.messageYjsSyncStep2, diff);
+export const encodeUpdate = (update: Uint8Array) => encodeSync(syncProtocol.messageYjsUpdate, update);
 
 export function encodeAwareness(update: Uint8Array): Uint8Array {
   const encoder = encoding.createEncoder();
