@@ -22,12 +22,19 @@ function startServer(port: number): Promise<{ process: ChildProcess; port: numbe
       stdio: ["ignore", "pipe", "inherit"],
     });
     let out = "";
+    const slow = setTimeout(() => reject(new Error(`server did not say "ready" within 30 s; it printed: ${out}`)), 30_000);
     proc.stdout!.on("data", (chunk: Buffer) => {
       out += chunk.toString();
       const match = /ready (\d+)/.exec(out);
-      if (match) resolve({ process: proc, port: Number(match[1]) });
+      if (match) {
+        clearTimeout(slow);
+        resolve({ process: proc, port: Number(match[1]) });
+      }
     });
-    proc.on("exit", (code) => reject(new Error(`server exited early with ${code}`)));
+    proc.on("exit", (code) => {
+      clearTimeout(slow);
+      reject(new Error(`server exited early with ${code}`));
+    });
   });
 }
 
@@ -53,6 +60,8 @@ describe("co-editing server crash", () => {
 
     const typed = 400;
     let killedAt = -1;
+    // Listen before killing: the exit can arrive while the burst is still awaiting a tick.
+    const exited = new Promise<void>((resolve) => child!.once("exit", () => resolve()));
     for (let i = 0; i < typed; i++) {
       writer.doc.getText("burst").insert(writer.doc.getText("burst").length, String(i % 10));
       if (i === 250) {
@@ -61,7 +70,7 @@ describe("co-editing server crash", () => {
       }
       if (i % 25 === 0) await new Promise((r) => setTimeout(r, 5));
     }
-    await new Promise<void>((resolve) => child!.once("exit", () => resolve()));
+    await exited;
     const seenByWatcher = Y.encodeStateVector(watcher.doc);
     const seenText = watcher.doc.getText("burst").toString();
     expect(killedAt).toBe(250);
