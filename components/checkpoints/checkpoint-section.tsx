@@ -86,7 +86,7 @@ export function CheckpointSection({ notebookId, canWrite }: { notebookId: string
     [picked, canWrite],
   );
 
-  const rows = (list.data?.checkpoints ?? []).map((c) => ({ ...c, createdAt: c.createdAt }));
+  const rows = useMemo(() => list.data?.checkpoints ?? [], [list.data]);
   // Compare oldest → newest, whichever order they were ticked in.
   const pair = picked.length === 2 ? [...picked].sort((a, b) => rows.findIndex((r) => r.id === b) - rows.findIndex((r) => r.id === a)) : null;
 

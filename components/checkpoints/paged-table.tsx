@@ -9,6 +9,7 @@ import {
   useReactTable,
   type ColumnDef,
   type ColumnFiltersState,
+  type PaginationState,
   type SortingState,
 } from "@tanstack/react-table";
 import { useId, useState, type ReactNode } from "react";
@@ -43,19 +44,34 @@ export function PagedTable<Row>({
   const searchId = useId();
   const [sorting, setSorting] = useState<SortingState>(initialSort);
   const [globalFilter, setGlobalFilter] = useState("");
+  const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize });
+  // Back to the first page when the caller's filters change (adjusting state while rendering,
+  // not in an effect, so the page never shows an empty later page for a frame).
+  const filterKey = JSON.stringify(columnFilters ?? []);
+  const [seenFilterKey, setSeenFilterKey] = useState(filterKey);
+  if (filterKey !== seenFilterKey) {
+    setSeenFilterKey(filterKey);
+    setPagination((current) => ({ ...current, pageIndex: 0 }));
+  }
   const table = useReactTable({
     data,
     columns,
-    state: { sorting, globalFilter, columnFilters: columnFilters ?? [] },
+    state: { sorting, globalFilter, columnFilters: columnFilters ?? [], pagination },
     onSortingChange: setSorting,
-    onGlobalFilterChange: setGlobalFilter,
+    onGlobalFilterChange: (updater) => {
+      setGlobalFilter(updater);
+      setPagination((current) => ({ ...current, pageIndex: 0 }));
+    },
+    onPaginationChange: setPagination,
     globalFilterFn: "includesString",
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
     getFilteredRowModel: getFilteredRowModel(),
     getPaginationRowModel: getPaginationRowModel(),
-    initialState: { pagination: { pageIndex: 0, pageSize } },
-    autoResetPageIndex: true,
+    // TanStack's automatic reset fires whenever `data` changes identity; a caller that maps its
+    // rows on every render would then reset, re-render and reset again without end (the page
+    // starves every other update). The resets above are the ones a reader expects.
+    autoResetPageIndex: false,
   });
   const rows = table.getRowModel().rows;
   const total = table.getFilteredRowModel().rows.length;
@@ -72,7 +88,7 @@ export function PagedTable<Row>({
             id={searchId}
             type="search"
             value={globalFilter}
-            onChange={(event) => setGlobalFilter(event.target.value)}
+            onChange={(event) => table.setGlobalFilter(event.target.value)}
             className="rounded-md border border-paper-edge bg-white/70 px-2 py-1 text-sm"
           />
         </div>

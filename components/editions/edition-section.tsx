@@ -3,7 +3,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
-import { useId, useState } from "react";
+import { useId, useMemo, useState } from "react";
 import { PagedTable } from "@/components/checkpoints/paged-table";
 import { fetchJson } from "@/components/data/api-client";
 import { Button } from "@/components/ui/button";
@@ -34,6 +34,7 @@ export function EditionSection({ notebookId, canPublish }: { notebookId: string;
   const titleId = useId();
   const [publishing, setPublishing] = useState(false);
   const list = useQuery({ queryKey: ["editions", notebookId], queryFn: () => fetchJson<{ editions: EditionRow[] }>(`/api/notebooks/${notebookId}/editions`) });
+  const editions = useMemo(() => list.data?.editions ?? [], [list.data]);
   return (
     <section aria-labelledby={titleId} className="space-y-3">
       <div className="flex flex-wrap items-center justify-between gap-2">
@@ -48,7 +49,7 @@ export function EditionSection({ notebookId, canPublish }: { notebookId: string;
       ) : (
         <PagedTable
           caption="Published editions of this notebook"
-          data={list.data?.editions ?? []}
+          data={editions}
           columns={columns}
           initialSort={[{ id: "number", desc: true }]}
           searchLabel="Find an edition"

@@ -120,6 +120,8 @@ export function MembersTable({
       setPagination((current) => ({ ...current, pageIndex: 0 }));
     },
     onPaginationChange: setPagination,
+    // Pages reset where filters change above; TanStack's own reset on every new `data` identity could loop.
+    autoResetPageIndex: false,
     enableSortingRemoval: false,
     getCoreRowModel: getCoreRowModel(),
     getFilteredRowModel: getFilteredRowModel(),

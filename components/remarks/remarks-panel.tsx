@@ -81,17 +81,21 @@ export function RemarksPanel({ canRequestReview }: { canRequestReview: boolean }
   }, [editor]);
   const located = useMemo(() => new Map(threads.map((t) => [t.id, locate(editor, t)])), [threads, editor, docVersion]); // eslint-disable-line react-hooks/exhaustive-deps
 
-  const rows: RemarkRow[] = threads.map((t) => ({
-    id: t.id,
-    order: located.get(t.id)?.order ?? Number.MAX_SAFE_INTEGER,
-    where: located.get(t.id)?.where ?? "",
-    excerpt: t.body.length > 90 ? `${t.body.slice(0, 90)}…` : t.body,
-    authorId: t.author?.id ?? "",
-    authorName: t.author?.name || t.author?.email || "a former member",
-    status: t.settled ? "settled" : "open",
-    replies: t.replies.length,
-    updatedAt: t.updatedAt,
-  }));
+  const rows: RemarkRow[] = useMemo(
+    () =>
+      threads.map((t) => ({
+        id: t.id,
+        order: located.get(t.id)?.order ?? Number.MAX_SAFE_INTEGER,
+        where: located.get(t.id)?.where ?? "",
+        excerpt: t.body.length > 90 ? `${t.body.slice(0, 90)}…` : t.body,
+        authorId: t.author?.id ?? "",
+        authorName: t.author?.name || t.author?.email || "a former member",
+        status: t.settled ? "settled" : "open",
+        replies: t.replies.length,
+        updatedAt: t.updatedAt,
+      })),
+    [threads, located],
+  );
 
   useEffect(() => {
     if (draft) draftRef.current?.scrollIntoView({ block: "nearest" });

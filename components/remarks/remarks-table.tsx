@@ -84,6 +84,8 @@ export function RemarksTable({ rows, selectedId, onOpen }: { rows: RemarkRow[]; 
       setPagination((current) => ({ ...current, pageIndex: 0 }));
     },
     onPaginationChange: setPagination,
+    // Pages reset where filters change above; TanStack's own reset on every new `data` identity could loop.
+    autoResetPageIndex: false,
     enableSortingRemoval: false,
     getCoreRowModel: getCoreRowModel(),
     getFilteredRowModel: getFilteredRowModel(),
