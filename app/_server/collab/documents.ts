@@ -24,8 +24,15 @@ export async function readNotebookDocument({ db, notebookId }: { db: Db; noteboo
   const codec = notebookJsonCodec();
   const live = registered()?.rooms.get(notebookId);
   if (live) {
-    await live.flush();
-    return { state: Y.encodeStateAsUpdate(live.doc), json: codec.readJson(live.doc) };
+    // Only bytes cross from the co-editing server's room (see NotebookRoom.currentState).
+    const state = await live.currentState();
+    const doc = new Y.Doc();
+    try {
+      Y.applyUpdate(doc, state);
+      return { state, json: codec.readJson(doc) };
+    } finally {
+      doc.destroy();
+    }
   }
   const stored = await getStoredNotebookDocument({ db, notebookId });
   if (!stored) return null;
@@ -53,15 +60,28 @@ export async function readNotebookDocument({ db, notebookId }: { db: Db; noteboo
 export async function editNotebookDocument({ db, notebookId, userId, edit }: { db: Db; notebookId: string; userId: string | null; edit: (doc: Y.Doc) => void }): Promise<void> {
   const hub = registered();
   if (hub) {
-    await hub.withRoom(notebookId, (room) => room.applyServerEdit(edit, userId));
+    await hub.withRoom(notebookId, async (room) => room.applyServerUpdate(editAsUpdate(await room.currentState(), edit), userId));
     return;
   }
   const room = new NotebookRoom({ db, notebookId, codec: notebookJsonCodec() });
   try {
-    await room.applyServerEdit(edit, userId);
+    await room.applyServerUpdate(editAsUpdate(await room.currentState(), edit), userId);
     await room.leaveEmpty();
   } finally {
     room.destroy();
+  }
+}
+
+/** Runs `edit` on a copy of `state` (with this module's Yjs) and returns just what it changed. */
+function editAsUpdate(state: Uint8Array, edit: (doc: Y.Doc) => void): Uint8Array {
+  const copy = new Y.Doc({ gc: false });
+  try {
+    Y.applyUpdate(copy, state);
+    const before = Y.encodeStateVector(copy);
+    edit(copy);
+    return Y.encodeStateAsUpdate(copy, before);
+  } finally {
+    copy.destroy();
   }
 }
 

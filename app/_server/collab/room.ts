@@ -139,17 +139,22 @@ export class NotebookRoom {
   }
 
   /**
-   * Applies a change made on the server (a checkpoint restore): the change is computed on a
-   * copy, stored like any writer's update, then applied and broadcast to every peer.
+   * The stored state as one update, after whatever is pending has been stored. Code outside
+   * the co-editing server (route handlers run in Next's bundle, with their own copy of Yjs)
+   * must only exchange bytes with a room: Yjs types from two copies do not mix.
    */
-  async applyServerEdit(edit: (doc: Y.Doc) => void, userId: string | null): Promise<void> {
+  async currentState(): Promise<Uint8Array> {
     await this.ready;
-    const copy = new Y.Doc({ gc: false });
-    Y.applyUpdate(copy, Y.encodeStateAsUpdate(this.doc));
-    const before = Y.encodeStateVector(copy);
-    edit(copy);
-    const update = Y.encodeStateAsUpdate(copy, before);
-    copy.destroy();
+    await this.flush();
+    return Y.encodeStateAsUpdate(this.doc);
+  }
+
+  /**
+   * Stores a change made on the server (a checkpoint restore, computed on a copy of
+   * {@link currentState}) like any writer's update, then applies and broadcasts it.
+   */
+  async applyServerUpdate(update: Uint8Array, userId: string | null): Promise<void> {
+    await this.ready;
     await this.enqueue(async () => {
       this.pending.push({ update, userId, peer: null });
       await this.storePending();
