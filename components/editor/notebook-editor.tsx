@@ -104,7 +104,10 @@ function SharedNotebookEditor({
 
   const view = useEditorState({
     editor,
-    selector: ({ editor: current }) => {
+    // Tiptap's state snapshot keeps the editor it had at the last transaction, so a document
+    // that never changes after the editor is made (a new, empty notebook) would stay on null.
+    selector: ({ editor: snapshot }) => {
+      const current = snapshot ?? editor;
       if (!current) return null;
       const verdicts = stepVerdictsKey.getState(current.state)?.verdicts;
       let probabilistic = 0;
