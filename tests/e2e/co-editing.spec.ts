@@ -1,4 +1,3 @@
-// Marked fixme: in the production build the notebook editor stays on "Opening the notebook…" (its client chunk never resolves; dev builds open it). Open until that is fixed.
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import { DashboardPage } from "./pages/dashboard-page";
 import { SharedEditor } from "./pages/shared-editor";
@@ -15,14 +14,14 @@ async function openAs(browser: Browser, email: string, title: string): Promise<P
   await signIn.signIn(email, demoPassword);
   const dashboard = new DashboardPage(page);
   await dashboard.expectLoaded();
-  await page.getByRole("link", { name: title }).first().click();
+  await dashboard.openNotebook(title);
   await new SharedEditor(page).waitUntilOpen();
   return page;
 }
 
 const notebook = "Test-particle orbits around Kestrel-7";
 
-test.fixme("two authors type in the same notebook and see each other's text and caret; a reviewer's copy is read-only", async ({ browser }) => {
+test("two authors type in the same notebook and see each other's text and caret; a reviewer's copy is read-only", async ({ browser }) => {
   const author = await openAs(browser, demoAccounts.author, notebook);
   const coauthor = await openAs(browser, demoAccounts.coauthor, notebook);
   const reviewer = await openAs(browser, demoAccounts.reviewer, notebook);

@@ -1,4 +1,3 @@
-// Marked fixme: in the production build the notebook editor stays on "Opening the notebook…" (its client chunk never resolves; dev builds open it). Open until that is fixed.
 import { expect, test } from "@playwright/test";
 import { DashboardPage } from "./pages/dashboard-page";
 import { EditionPage, EditionRecords } from "./pages/edition-records";
@@ -8,14 +7,15 @@ import { demoAccounts, demoPassword } from "./support/demo-accounts";
 
 const notebook = "Test-particle orbits around Kestrel-7";
 
-test.fixme("the group lead publishes an edition of a demo notebook; its permanent link shows the ledger to someone signed out", async ({ browser }) => {
+test("the group lead publishes an edition of a demo notebook; its permanent link shows the ledger to someone signed out", async ({ browser }) => {
   test.setTimeout(240_000);
   const lead = await (await browser.newContext()).newPage();
   const signIn = new SignInPage(lead);
   await signIn.open();
   await signIn.signIn(demoAccounts.lead, demoPassword);
-  await new DashboardPage(lead).expectLoaded();
-  await lead.getByRole("link", { name: notebook }).first().click();
+  const dashboard = new DashboardPage(lead);
+  await dashboard.expectLoaded();
+  await dashboard.openNotebook(notebook);
   await new SharedEditor(lead).waitUntilOpen();
 
   const link = await new EditionRecords(lead).publish();

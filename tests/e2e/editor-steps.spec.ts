@@ -1,4 +1,3 @@
-// Marked fixme: in the production build the notebook editor stays on "Opening the notebook…" (its client chunk never resolves; dev builds open it). Open until that is fixed.
 import { expect, test } from "@playwright/test";
 import { DashboardPage } from "./pages/dashboard-page";
 import { NotebookPage } from "./pages/notebook-page";
@@ -15,7 +14,7 @@ const POTENTIAL = "V = -\\frac{GM\\mu}{r} + \\frac{L^2}{2\\mu r^2}";
 const DERIVATIVE = "\\frac{dV}{dr} = \\frac{GM\\mu}{r^2} - \\frac{L^2}{\\mu r^3}";
 const WRONG = "\\frac{dV}{dr} = \\frac{GM\\mu}{r^2} - \\frac{2L^2}{\\mu r^3}";
 
-test.fixme("an author writes a block and three steps and sees verified, verified, refuted with a witness; a reader sees it read-only", async ({ page, browser }) => {
+test("an author writes a block and three steps and sees verified, verified, refuted with a witness; a reader sees it read-only", async ({ page, browser }) => {
   const signIn = new SignInPage(page);
   await signIn.open();
   await signIn.signIn(demoAccounts.author, demoPassword);

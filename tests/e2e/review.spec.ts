@@ -1,4 +1,3 @@
-// Marked fixme: in the production build the notebook editor stays on "Opening the notebook…" (its client chunk never resolves; dev builds open it). Open until that is fixed.
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import { DashboardPage } from "./pages/dashboard-page";
 import { RemarksPanel } from "./pages/remarks-panel";
@@ -17,13 +16,14 @@ async function openAs(browser: Browser, email: string): Promise<Page> {
   const signIn = new SignInPage(page);
   await signIn.open();
   await signIn.signIn(email, demoPassword);
-  await new DashboardPage(page).expectLoaded();
-  await page.getByRole("link", { name: notebook }).first().click();
+  const dashboard = new DashboardPage(page);
+  await dashboard.expectLoaded();
+  await dashboard.openNotebook(notebook);
   await new SharedEditor(page).waitUntilOpen();
   return page;
 }
 
-test.fixme("a reviewer remarks on the refuted step; the author is mailed, sees it, fixes the step and settles it", async ({ browser }) => {
+test("a reviewer remarks on the refuted step; the author is mailed, sees it, fixes the step and settles it", async ({ browser }) => {
   const remark = `The last term of step 17 has the wrong sign (${Date.now().toString(36)}).`;
 
   const reviewer = await openAs(browser, demoAccounts.reviewer);
@@ -67,7 +67,7 @@ test.fixme("a reviewer remarks on the refuted step; the author is mailed, sees i
   await expect(reviewerRemarks.threads()).toContainText(remark);
 });
 
-test.fixme("a reader reads remarks but has no remark button", async ({ browser }) => {
+test("a reader reads remarks but has no remark button", async ({ browser }) => {
   const reader = await openAs(browser, demoAccounts.reader);
   await expect(new RemarksPanel(reader).region()).toBeVisible();
   await expect(reader.getByRole("button", { name: /^Remark on step/ })).toHaveCount(0);

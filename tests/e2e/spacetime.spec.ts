@@ -1,4 +1,3 @@
-// Marked fixme: in the production build the notebook editor stays on "Opening the notebook…" (its client chunk never resolves; dev builds open it). Open until that is fixed.
 import { expect, test, type Page } from "@playwright/test";
 import { DashboardPage } from "./pages/dashboard-page";
 import { SharedEditor } from "./pages/shared-editor";
@@ -10,12 +9,13 @@ async function openDemoNotebook(page: Page, title: string) {
   const signIn = new SignInPage(page);
   await signIn.open();
   await signIn.signIn(demoAccounts.author, demoPassword);
-  await new DashboardPage(page).expectLoaded();
-  await page.getByRole("link", { name: title }).first().click();
+  const dashboard = new DashboardPage(page);
+  await dashboard.expectLoaded();
+  await dashboard.openNotebook(title);
   await new SharedEditor(page).waitUntilOpen();
 }
 
-test.fixme("an author opens the curvature sheet and the orbit panel of the Kestrel-7 spacetime block", async ({ page }) => {
+test("an author opens the curvature sheet and the orbit panel of the Kestrel-7 spacetime block", async ({ page }) => {
   await openDemoNotebook(page, "Test-particle orbits around Kestrel-7");
   const block = new SpacetimeBlockPanel(page, /Kestrel-7 exterior/);
 

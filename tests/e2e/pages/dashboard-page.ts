@@ -39,6 +39,12 @@ export class DashboardPage {
     await form.getByRole("button", { name: "Create the notebook" }).click();
   }
 
+  /** Finds a notebook by its title through the table's filter (other tests' notebooks may page it out) and opens it. */
+  async openNotebook(title: string) {
+    await this.filter(title);
+    await this.notebooksTable().getByRole("link", { name: title }).first().click();
+  }
+
   async filter(text: string) {
     await this.page.getByLabel("Filter notebooks by title").fill(text);
   }
