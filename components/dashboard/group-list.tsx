@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { roleLabel } from "@/components/data/roles";
+import { roleArticle, roleLabel } from "@/components/data/roles";
 import type { GroupSummary } from "@/components/data/types";
 
 export function GroupList({ groups }: { groups: GroupSummary[] }) {
@@ -15,7 +15,7 @@ export function GroupList({ groups }: { groups: GroupSummary[] }) {
             {group.name}
           </Link>
           <p className="text-sm text-ink-soft">
-            You are {group.role === "lead" ? "the" : "a"} <span className="font-medium">{roleLabel(group.role)}</span>
+            You are {roleArticle(group.role)} <span className="font-medium">{roleLabel(group.role)}</span>
             {typeof group.memberCount === "number" && ` · ${group.memberCount} member${group.memberCount === 1 ? "" : "s"}`}
           </p>
         </li>

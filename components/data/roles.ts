@@ -25,3 +25,9 @@ export function canWriteNotebooks(role: Role | null | undefined): boolean {
 export function roleLabel(role: string | null | undefined): string {
   return role && role in roleLabels ? roleLabels[role as Role] : "no role";
 }
+
+/** The article before a role in "You are … in the group": each group has one lead. */
+export function roleArticle(role: string | null | undefined): "the" | "an" | "a" {
+  if (role === "lead") return "the";
+  return /^[aeiou]/i.test(roleLabel(role)) ? "an" : "a";
+}

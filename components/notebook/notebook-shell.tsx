@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
-import { roleLabel } from "@/components/data/roles";
+import { roleArticle, roleLabel } from "@/components/data/roles";
 import type { Role } from "@/components/data/roles";
 import { NotebookRecords } from "./notebook-records";
 import { NotebookTitle } from "./notebook-title";
@@ -34,7 +34,7 @@ export function NotebookShell({ notebookId, title, groupId, groupName, role, rea
         <NotebookTitle notebookId={notebookId} title={title} canRename={!readOnly} />
         <p className="mt-2 flex flex-wrap items-center gap-2 text-sm text-ink-soft">
           <span>
-            You are {role === "lead" ? "the" : "a"} <strong>{roleLabel(role)}</strong> in {groupName}.
+            You are {roleArticle(role)} <strong>{roleLabel(role)}</strong> in {groupName}.
           </span>
           {readOnly && (
             <span className="inline-flex items-center gap-1 rounded-full border border-paper-edge bg-paper-deep px-2 py-0.5 text-xs font-medium text-ink">

@@ -1,4 +1,5 @@
 import "server-only";
+import { appBaseUrl } from "../secret";
 
 /** Characters BibTeX fields cannot hold as they are. */
 function bibEscape(text: string): string {
@@ -53,9 +54,10 @@ export function editionPath(notebookId: string, number: number): string {
   return `/editions/${notebookId}/${number}`;
 }
 
-/** The site's own origin for links written into citations. */
-export function siteOrigin(request?: Request): string {
-  const configured = process.env.NEXTAUTH_URL;
-  if (configured) return configured.replace(/\/$/, "");
-  return request ? new URL(request.url).origin : "http://localhost:3000";
+/**
+ * The site's own origin for links written into citations and mails: the configured one,
+ * never the request's Host header (a client could name any host and have it cited or mailed).
+ */
+export function siteOrigin(): string {
+  return appBaseUrl();
 }

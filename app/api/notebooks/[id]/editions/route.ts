@@ -32,7 +32,7 @@ export const GET = handleRoute<Params>(async (request, { params }) => {
   const editions = await listEditions({ db, notebookId: notebook.id });
   // Nothing published yet: to outsiders the notebook stays as invisible as any other.
   if (editions.length === 0 && !can(actor, "notebook:read", resource)) throw new AppError("not_found:notebook", "No notebook with that id.");
-  const origin = siteOrigin(request);
+  const origin = siteOrigin();
   return Response.json({
     editions: editions.map(({ id: _id, publishedBy: _by, ...edition }) => ({
       ...edition,
@@ -67,11 +67,11 @@ export const POST = handleRoute<Params>(async (request, { params }) => {
   const { published, ledger } = outcome;
   await auditChange({ db, actor, action: "notebook:publish", resourceType: "notebook", resourceId: notebook.id, detail: { number: published.number, sha256: published.sha256, reason: published.reason }, request });
   // The edition is stored and frozen; a mail that fails to go out must not undo that.
-  await sendEditionPublishedMail({ db, notebookId: notebook.id, number: published.number, publishedBy: user.id, permalink: `${siteOrigin(request)}${editionPath(notebook.id, published.number)}` }).catch(
+  await sendEditionPublishedMail({ db, notebookId: notebook.id, number: published.number, publishedBy: user.id, permalink: `${siteOrigin()}${editionPath(notebook.id, published.number)}` }).catch(
     (error: unknown) => console.error("[editions] could not send the edition-published mail", error),
   );
   return Response.json(
-    { number: published.number, sha256: published.sha256, ledger, url: `${siteOrigin(request)}${editionPath(notebook.id, published.number)}` },
+    { number: published.number, sha256: published.sha256, ledger, url: `${siteOrigin()}${editionPath(notebook.id, published.number)}` },
     { status: 201 },
   );
 });

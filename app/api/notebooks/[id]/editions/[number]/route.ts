@@ -27,7 +27,7 @@ export const GET = handleRoute<Params>(async (request, { params }) => {
   const edition = await getEditionByNumber({ db, notebookId: notebook.id, number });
   if (!edition) throw new AppError("not_found:edition", `This notebook has no edition ${number}.`);
   const group = await getGroupById({ db, id: notebook.groupId });
-  const url = `${siteOrigin(request)}${editionPath(notebook.id, number)}`;
+  const url = `${siteOrigin()}${editionPath(notebook.id, number)}`;
   return Response.json({
     edition: {
       notebookId: notebook.id,
