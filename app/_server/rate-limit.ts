@@ -3,7 +3,7 @@ import { RateLimiterMemory, RateLimiterRes } from "rate-limiter-flexible";
 import { AppError } from "./errors";
 
 // Per process, in memory: enough for one server. Kept on globalThis so dev reloads keep counts.
-type Limiters = { signInByIp: RateLimiterMemory; signInByAccount: RateLimiterMemory; mailByIp: RateLimiterMemory };
+type Limiters = { signInByIp: RateLimiterMemory; signInByAccount: RateLimiterMemory; mailByIp: RateLimiterMemory; casByIp: RateLimiterMemory };
 const key = Symbol.for("vierbein.rate-limiters");
 const store = globalThis as unknown as Record<symbol, Limiters | undefined>;
 
@@ -16,6 +16,9 @@ function limiters(): Limiters {
     signInByAccount: new RateLimiterMemory({ keyPrefix: "sign-in-account", points: 5, duration: 15 * 60, blockDuration: 15 * 60 }),
     // Mails we send on request (sign-up, password reset): 20 per hour per network address.
     mailByIp: new RateLimiterMemory({ keyPrefix: "mail-ip", points: 20, duration: 60 * 60 }),
+    // The open engine endpoint: 120 verbs a minute per network address, far above a script
+    // checking a derivation step by step, well below what would keep the worker pool busy for others.
+    casByIp: new RateLimiterMemory({ keyPrefix: "cas-ip", points: 120, duration: 60 }),
   });
 }
 
@@ -57,6 +60,17 @@ export async function checkMailRequestAllowed({ ip }: { ip: string }): Promise<v
     await limiters().mailByIp.consume(ip);
   } catch (error) {
     if (isRejection(error)) throw new AppError("rate_limited:mail", "Too many requests from your network. Try again later.");
+    throw error;
+  }
+}
+
+/** Limits the open engine endpoint (POST /api/cas/<verb>) per network address; false once used up. */
+export async function casRequestAllowed({ ip }: { ip: string }): Promise<boolean> {
+  try {
+    await limiters().casByIp.consume(ip);
+    return true;
+  } catch (error) {
+    if (isRejection(error)) return false;
     throw error;
   }
 }

@@ -1,11 +1,14 @@
 // POST /api/cas/<verb> — runs one cas verb (check, dims, and the spacetime verbs) in the Node worker pool.
 // 200 with the verb's JSON answer; otherwise {error: {code, message, position?, field?}} with
 // 400 malformed/unreadable, 404 unknown verb, 413 body over the byte cap, 415 not JSON,
-// 422 over the checker's limits or its time limit (2 s), 503 busy, 500 internal.
+// 422 over the checker's limits or its time limit (2 s), 429 over 120 requests a minute from one
+// address, 503 busy, 500 internal.
 import "server-only";
 import { isVerb, validateVerbInput } from "@/cas/api/index";
 import { sharedCasPool } from "@/cas/worker/node-pool";
 import { MAX_REQUEST_BYTES } from "@/cas/worker/limits";
+import { casRequestAllowed } from "@/app/_server/rate-limit";
+import { clientIp } from "@/app/_server/request-info";
 import { STATUS_BY_CODE, verbParamsSchema } from "./schema";
 
 export const runtime = "nodejs";
@@ -22,6 +25,9 @@ export async function POST(request: Request, context: { params: Promise<{ verb: 
     const params = verbParamsSchema.safeParse(await context.params);
     if (!params.success || !isVerb(params.data.verb)) return refuse({ code: "unknown_verb", message: "no such cas verb" });
     const verb = params.data.verb;
+    if (!(await casRequestAllowed({ ip: clientIp(request.headers) }))) {
+      return refuse({ code: "rate_limited", message: "too many engine requests from your network address; wait a minute and try again" }, 429);
+    }
 
     const type = request.headers.get("content-type");
     if (type && !/^application\/(.+\+)?json\b/i.test(type)) return refuse({ code: "malformed", message: "send the request as JSON (Content-Type: application/json)" }, 415);

@@ -1,4 +1,5 @@
-import { afterAll, describe, expect, it } from "vitest";
+import { afterAll, beforeEach, describe, expect, it } from "vitest";
+import { resetRateLimits } from "../../../../app/_server/rate-limit";
 import { POST } from "../../../../app/api/cas/[verb]/route";
 import { sharedCasPool } from "../../../../cas/worker/node-pool";
 import { STEP_CORPUS } from "../../../cas/check/step-corpus";
@@ -9,6 +10,8 @@ const call = (verb: string, body: string, headers: Record<string, string> = { "c
   POST(new Request(`http://localhost/api/cas/${verb}`, { method: "POST", body, headers }), { params: Promise.resolve({ verb }) });
 
 describe("POST /api/cas/[verb]", () => {
+  beforeEach(() => resetRateLimits());
+
   it("answers a check with its verdict", async () => {
     const res = await call("check", JSON.stringify(STEP_CORPUS.find((s) => s.id === "substitute-E-L")!.request));
     expect(res.status).toBe(200);
@@ -51,5 +54,15 @@ describe("POST /api/cas/[verb]", () => {
     await call("check", JSON.stringify({ context: {}, from: "(".repeat(10_000) + "x" + ")".repeat(10_000), to: "x" }));
     const res = await call("check", JSON.stringify({ context: {}, from: "(a+b)^2", to: "a^2+2ab+b^2" }));
     expect(res.status).toBe(200);
+  });
+
+  it("answers 429 once one address has sent 120 requests in a minute, and other addresses still get answers", async () => {
+    const from = (ip: string) => ({ "content-type": "application/json", "x-forwarded-for": ip });
+    const malformed = "{oops"; // refused before the worker, so the loop is cheap
+    for (let i = 0; i < 120; i++) expect((await call("check", malformed, from("192.0.2.7"))).status).toBe(400);
+    const limited = await call("check", malformed, from("192.0.2.7"));
+    expect(limited.status).toBe(429);
+    expect((await limited.json()).error.code).toBe("rate_limited");
+    expect((await call("check", malformed, from("192.0.2.8"))).status).toBe(400);
   });
 });
