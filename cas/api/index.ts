@@ -7,6 +7,7 @@ import { curvatureRequestSchema, runCurvature } from "./curvature";
 import { geodesicsRequestSchema, runGeodesics } from "./geodesics";
 import { potentialRequestSchema, runPotential } from "./potential";
 import { orbitsRequestSchema, runOrbits } from "./orbits";
+import { limitRequestSchema, runLimit } from "./limit";
 
 /**
  * The cas verbs, transport-neutral: each is a zod schema for its input and a
@@ -30,6 +31,7 @@ export const VERBS: Readonly<Record<string, Verb>> = {
   geodesics: verb(geodesicsRequestSchema, runGeodesics),
   potential: verb(potentialRequestSchema, runPotential),
   orbits: verb(orbitsRequestSchema, runOrbits),
+  limit: verb(limitRequestSchema, runLimit),
 };
 
 export type VerbName = keyof typeof VERBS;

@@ -49,6 +49,14 @@ describe("npm run -s cas -- check / dims (issue 3, item 6)", () => {
     expect(r.json.terms[1]).toEqual({ latex: "\\mu c^{2}", dimension: "M L^2 T^-2" });
   });
 
+  it("probes a limit: the redshift factor √(1 − 2GM/(rc²)) → 1 as c → ∞ (Hartle (2003) §9.2, section from memory), and lists the verb", () => {
+    const r = cas(["limit"], JSON.stringify({ context: {}, expression: "\\sqrt{1-\\frac{2GM}{rc^2}}", parameter: "c", target: "infinity" }));
+    expect(r.code).toBe(0);
+    expect(r.json.sides[0].estimate).toMatchObject({ kind: "converges", value: "1" });
+    expect(r.json.note).toMatch(/not a proof/);
+    expect(cas(["nonsense"], "{}").json.error.message).toMatch(/\blimit\b/);
+  });
+
   it("is what `npm run -s cas` runs", () => {
     const run = spawnSync("npm", ["run", "-s", "cas", "--", "dims"], { input: JSON.stringify({ context: { symbols: { r: "length" } }, relation: "r = r" }), encoding: "utf8", timeout: 60_000 });
     expect(run.status).toBe(0);
