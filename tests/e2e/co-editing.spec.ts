@@ -22,6 +22,8 @@ async function openAs(browser: Browser, email: string, title: string): Promise<P
 const notebook = "Test-particle orbits around Kestrel-7";
 
 test("two authors type in the same notebook and see each other's text and caret; a reviewer's copy is read-only", async ({ browser }) => {
+  // Several browsers, each checking the notebook's steps in its own worker: slow on two cores.
+  test.slow();
   const author = await openAs(browser, demoAccounts.author, notebook);
   const coauthor = await openAs(browser, demoAccounts.coauthor, notebook);
   const reviewer = await openAs(browser, demoAccounts.reviewer, notebook);

@@ -8,6 +8,8 @@ import { demoAccounts, demoPassword } from "./support/demo-accounts";
 const notebook = "Test-particle orbits around Kestrel-7";
 
 test("the group lead publishes an edition of a demo notebook; its permanent link shows the ledger to someone signed out", async ({ browser }) => {
+  // Several browsers, each checking the notebook's steps in its own worker: slow on two cores.
+  test.slow();
   test.setTimeout(240_000);
   const lead = await (await browser.newContext()).newPage();
   const signIn = new SignInPage(lead);

@@ -15,6 +15,8 @@ const DERIVATIVE = "\\frac{dV}{dr} = \\frac{GM\\mu}{r^2} - \\frac{L^2}{\\mu r^3}
 const WRONG = "\\frac{dV}{dr} = \\frac{GM\\mu}{r^2} - \\frac{2L^2}{\\mu r^3}";
 
 test("an author writes a block and three steps and sees verified, verified, refuted with a witness; a reader sees it read-only", async ({ page, browser }) => {
+  // Several browsers, each checking the notebook's steps in its own worker: slow on two cores.
+  test.slow();
   const signIn = new SignInPage(page);
   await signIn.open();
   await signIn.signIn(demoAccounts.author, demoPassword);

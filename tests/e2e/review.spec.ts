@@ -24,6 +24,8 @@ async function openAs(browser: Browser, email: string): Promise<Page> {
 }
 
 test("a reviewer remarks on the refuted step; the author is mailed, sees it, fixes the step and settles it", async ({ browser }) => {
+  // Several browsers, each checking the notebook's steps in its own worker: slow on two cores.
+  test.slow();
   const remark = `The last term of step 17 has the wrong sign (${Date.now().toString(36)}).`;
 
   const reviewer = await openAs(browser, demoAccounts.reviewer);
