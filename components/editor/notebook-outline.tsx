@@ -1,10 +1,23 @@
 "use client";
 
 import type { Editor } from "@tiptap/core";
+import { renderLatex } from "@/editor/katex-render";
 import type { OutlineEntry } from "@/editor/outline";
 import { VerdictShape } from "./verdict-mark";
 
 const verdictTone: Record<string, string> = { verified: "text-accent", refuted: "text-alarm", undecided: "text-[#7a5a12]" };
+
+// The outline re-renders on every transaction; a step's rendering only changes with its source.
+const renderedRelations = new Map<string, string>();
+function relationHtml(latex: string): string {
+  let html = renderedRelations.get(latex);
+  if (html === undefined) {
+    html = renderLatex(latex, false).html;
+    if (renderedRelations.size > 2000) renderedRelations.clear();
+    renderedRelations.set(latex, html);
+  }
+  return html;
+}
 
 /** Moves the caret to a block and scrolls it into the middle of the view. */
 export function jumpTo(editor: Editor, pos: number): void {
@@ -32,7 +45,7 @@ export function NotebookOutline({ editor, entries }: { editor: Editor; entries: 
                 <VerdictShape word={entry.verdict} className={verdictTone[entry.verdict] ?? "text-ink-muted"} />
                 <span className="tabular-nums">({entry.number})</span>
                 <span className="sr-only">{entry.verdict}</span>
-                <span className="truncate font-mono text-xs text-ink-muted">{entry.relation.slice(0, 40)}</span>
+                <span className="outline-relation min-w-0 flex-1 overflow-hidden whitespace-nowrap text-xs text-ink-muted" dangerouslySetInnerHTML={{ __html: relationHtml(entry.relation) }} />
               </>
             ) : entry.kind === "spacetime" ? (
               <span className="text-accent">◆ {entry.name || "Spacetime block"}</span>
