@@ -93,6 +93,28 @@ export function substitutesIntoLineElement(detail: string, block: DerivationBloc
 }
 
 /**
+ * The definitions made above a step under the same spacetime block, as the checker's context
+ * takes them: steps justified as "definition", except definitions of declared constants
+ * through velocities (constants of motion such as E and L).
+ *
+ * @example
+ * definitionsBefore(extractDerivation(doc), 3) // ["r_s = \\frac{2GM}{c^2}"]
+ */
+export function definitionsBefore(derivation: Derivation, index: number): string[] {
+  const step = derivation.steps[index];
+  const block = step.blockIndex === null ? null : derivation.blocks[step.blockIndex];
+  const declaredConstants = new Set((block?.constants ?? []).map((c) => c.symbol.replace(/\s+/g, "")));
+  return derivation.steps
+    .slice(0, index)
+    .filter((s) => s.kind === "definition" && s.blockIndex === step.blockIndex && s.relation)
+    // A declared constant defined through velocities (E, L) is a constant of motion: its
+    // definition is used when cited, never as a rewrite rule, or "differentiate by r" would
+    // see L = μr²φ̇ vary with r. Definitions such as r_s = 2GM/c² stay in the context.
+    .filter((s) => !(declaredConstants.has(definedSymbol(s.relation)) && /\\d?dot\b/.test(s.relation)))
+    .map((s) => s.relation);
+}
+
+/**
  * Plans the check of one step. `from` is the relation of the step it explicitly follows
  * (`follows`); otherwise of the first cited step — except for a substitution, whose cited
  * steps are what is substituted — otherwise of the previous non-definition step, and for
@@ -113,15 +135,7 @@ export function planStepCheck(derivation: Derivation, stepId: string): StepCheck
 
   const byId = new Map(derivation.steps.map((s) => [s.id, s]));
   const block = step.blockIndex === null ? null : derivation.blocks[step.blockIndex];
-  const declaredConstants = new Set((block?.constants ?? []).map((c) => c.symbol.replace(/\s+/g, "")));
-  const definitions = derivation.steps
-    .slice(0, index)
-    .filter((s) => s.kind === "definition" && s.blockIndex === step.blockIndex && s.relation)
-    // A declared constant defined through velocities (E, L) is a constant of motion: its
-    // definition is used when cited, never as a rewrite rule, or "differentiate by r" would
-    // see L = μr²φ̇ vary with r. Definitions such as r_s = 2GM/c² stay in the context.
-    .filter((s) => !(declaredConstants.has(definedSymbol(s.relation)) && /\\d?dot\b/.test(s.relation)))
-    .map((s) => s.relation);
+  const definitions = definitionsBefore(derivation, index);
   const cited = step.cites.map((id) => byId.get(id)).filter((s): s is DerivationStep => s !== undefined);
   const previous = step.previousId ? byId.get(step.previousId) : undefined;
 
