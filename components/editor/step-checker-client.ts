@@ -1,6 +1,7 @@
 "use client";
 
 import type { CheckAnswer, CheckError, CheckRequest } from "@/cas/check/protocol";
+import type { LimitProbeAnswer, LimitProbeRequest } from "@/cas/limit/protocol";
 import { createBrowserChecker } from "@/cas/worker/browser-client";
 import type { StepChecker } from "@/editor/step-checker";
 
@@ -41,10 +42,28 @@ export function createHttpStepChecker(endpoint = "/api/cas/check"): StepChecker 
   };
 }
 
+/**
+ * Runs the limit probe through `POST /api/cas/limit` (the fallback for browsers without the
+ * worker). Always resolves: an unreachable server or an unknown answer becomes an error.
+ */
+async function postLimitProbe(request: LimitProbeRequest, signal?: AbortSignal, endpoint = "/api/cas/limit"): Promise<LimitProbeAnswer | CheckError> {
+  try {
+    const response = await fetch(endpoint, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(request), signal });
+    const body: unknown = await response.json().catch(() => null);
+    if (response.ok && Array.isArray((body as { sides?: unknown } | null)?.sides)) return body as LimitProbeAnswer;
+    return asCheckError(body) ?? { error: { code: "unavailable", message: `The checker is unavailable (HTTP ${response.status}).` } };
+  } catch (err) {
+    if (signal?.aborted) return { error: { code: "aborted", message: "the probe was cancelled" } };
+    return { error: { code: "unavailable", message: err instanceof Error ? err.message : "The checker could not be reached." } };
+  }
+}
+
 /** The checker the notebook uses, and how to let it go when the editor closes. */
 export interface NotebookChecker extends StepChecker {
   /** Where checks run, for the status line: in this tab's worker, or on the server. */
   readonly where: "worker" | "server";
+  /** The limit probe of one step (the `limit` verb), where the checks run. */
+  probeLimit(request: LimitProbeRequest, signal?: AbortSignal): Promise<LimitProbeAnswer | CheckError>;
   dispose(): void;
 }
 
@@ -56,9 +75,14 @@ export interface NotebookChecker extends StepChecker {
 export function createNotebookChecker(): NotebookChecker {
   try {
     const worker = createBrowserChecker();
-    return { where: "worker", check: (request, signal) => worker.check(request, signal), dispose: () => worker.dispose() };
+    return {
+      where: "worker",
+      check: (request, signal) => worker.check(request, signal),
+      probeLimit: (request, signal) => worker.run("limit", request, signal) as Promise<LimitProbeAnswer | CheckError>,
+      dispose: () => worker.dispose(),
+    };
   } catch {
     const http = createHttpStepChecker();
-    return { where: "server", check: http.check, dispose: () => {} };
+    return { where: "server", check: http.check, probeLimit: (request, signal) => postLimitProbe(request, signal), dispose: () => {} };
   }
 }

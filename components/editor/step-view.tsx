@@ -8,6 +8,7 @@ import { stepNumberingFromDecorations, stepNumberingKey } from "@/editor/step-nu
 import { verdictFromDecorations, verdictWord } from "@/editor/step-verdicts";
 import { VerdictMark } from "./verdict-mark";
 import { StepRemarkButton } from "@/components/remarks/remark-actions";
+import { LimitProbe } from "./limit-probe";
 
 const KIND_LABEL: Record<JustificationKind, string> = {
   algebra: "algebra",
@@ -176,6 +177,7 @@ export function StepView({ node, decorations, editor, updateAttributes }: ReactN
       <aside contentEditable={false} className="col-start-2 mt-1 border-l border-dashed border-paper-edge pl-3 md:col-start-3 md:mt-0 md:pt-2" aria-label={`Verdict of step ${numbering.stepNumber ?? ""}`}>
         <VerdictMark verdict={verdict} stepNumber={numbering.stepNumber} />
         <StepRemarkButton stepId={id} stepNumber={numbering.stepNumber} />
+        <LimitProbe editor={editor} stepId={id} stepNumber={numbering.stepNumber} kind={kind} detail={node.attrs.detail} />
       </aside>
     </NodeViewWrapper>
   );
