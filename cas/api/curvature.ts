@@ -32,7 +32,7 @@ export function runCurvature(input: z.infer<typeof curvatureRequestSchema>) {
       ...CONVENTIONS,
       signature: sheet.signature.text,
       coordinates: sheet.coordinates,
-      verification: `every listed component equals the unsimplified value at ${sheet.verification.points} random points (${sheet.verification.digits} digits), and every omitted one is 0 there; a numeric check is strong evidence, not a proof`,
+      verification: `every listed component equals the unsimplified value at ${sheet.verification.points} random points (${sheet.verification.digits}-digit arithmetic, to within ${sheet.verification.tolerance.toExponential(0)} relative), and every omitted one is 0 there; a numeric check is strong evidence, not a proof`,
     },
     timings: sheet.timings,
   };

@@ -1,9 +1,7 @@
-import type Decimal from "decimal.js";
 import type { Expr } from "../expr/types";
 import { exprSize } from "../expr/traverse";
-import { decimalContext, evaluateDecimal, type DecimalContext } from "../numeric/evaluate";
-import { completeTrigValues, freeNamesOf, freezeTrig, jetify, randomSource, randomValues } from "../simplify/probe";
-import { freeVariables } from "../expr/traverse";
+import { decimalContext } from "../numeric/evaluate";
+import { ddArithmetic, decimalArithmetic, OutOfRangeError } from "../numeric/arithmetic";
 import { viaNerdamer } from "../simplify/nerdamer-bridge";
 import { fromRatFun } from "../simplify/algebra/to-expr";
 import { type RatFun, rfIsZero } from "../simplify/algebra/ratfun";
@@ -14,7 +12,8 @@ import { riemann } from "./riemann";
 import { ricci, ricciScalar, einstein } from "./ricci";
 import { kretschmann } from "./kretschmann";
 import { validateMetric, type Signature } from "./validate";
-import { curvatureAtPoint, rawDerivatives, type CurvatureAtPoint } from "./numeric-curvature";
+import { rawDerivatives, type CurvatureAtPoint } from "./numeric-curvature";
+import { SheetVerifier } from "./sheet-verifier";
 
 /** One listed component: indices are positions in the coordinate list. */
 export interface TensorComponent {
@@ -36,7 +35,8 @@ export interface CurvatureSheet {
   /** G_{ab}, a ≤ b, non-zero only. */
   readonly einstein: readonly TensorComponent[];
   readonly kretschmann: Expr;
-  readonly verification: { readonly points: number; readonly digits: number; readonly checked: number };
+  /** Points each form was checked at, digits of the arithmetic, relative tolerance of a check, components checked. */
+  readonly verification: { readonly points: number; readonly digits: number; readonly tolerance: number; readonly checked: number };
   /** Milliseconds per stage. */
   readonly timings: Readonly<Record<string, number>>;
 }
@@ -53,8 +53,13 @@ export interface CurvatureOptions {
   readonly signal?: AbortSignal;
   /** Also try nerdamer's simplify/factor on each component (slower; results still verified). */
   readonly thorough?: boolean;
-  /** Random points each component is checked at (default 2) and digits (default 40). */
+  /** Random points each component is checked at (default 2). */
   readonly points?: number;
+  /**
+   * Check in decimal.js at this many digits, with a relative tolerance of 10^(14 − digits).
+   * Default: double-double (31 digits) with a tolerance of 1e-11, decimal.js at 32 digits
+   * when a value leaves double-double's range.
+   */
   readonly digits?: number;
 }
 
@@ -72,43 +77,14 @@ export const CONVENTIONS = {
 
 const STAGES = ["validate", "inverse", "christoffel", "riemann", "ricci", "kretschmann", "display"] as const;
 
-class Verifier {
-  private readonly D: DecimalContext;
-  readonly points: { values: Record<string, Decimal>; raw: CurvatureAtPoint }[] = [];
-  checked = 0;
-  /** Relative tolerance 10^(14 − digits): room for rounding in long raw sums. */
-  private readonly tolerance: Decimal;
-  constructor(metric: Metric, readonly count: number, readonly digits: number) {
-    this.D = decimalContext(digits);
-    this.tolerance = new this.D(10).pow(14 - digits);
-    const raw = rawDerivatives(metric);
-    const next = randomSource(11);
-    for (let attempt = 0; attempt < count * 8 && this.points.length < count; attempt += 1) {
-      const values = completeTrigValues(raw.names, randomValues(this.D, freeNamesOf(raw.names), next));
-      try {
-        this.points.push({ values, raw: curvatureAtPoint(this.D, raw, values) });
-      } catch { /* a pole or outside the domain: draw again */ }
-    }
-    if (this.points.length < count) throw new Error("the curvature could not be evaluated at enough random points to verify it");
-  }
-
-  /** Is `shown` equal to the raw value at every point? */
-  agrees(shown: Expr, pick: (at: CurvatureAtPoint) => Decimal): boolean {
-    const tree = freezeTrig(jetify(shown));
-    return this.points.every(({ values, raw }) => {
-      const expected = pick(raw);
-      let got: Decimal;
-      try { got = evaluateDecimal(this.D, tree, { values: completeTrigValues(freeVariables(tree), values) }); } catch { return false; }
-      const scale = this.D.max(1, expected.abs(), got.abs());
-      return got.minus(expected).abs().lte(scale.times(this.tolerance));
-    });
-  }
-
-  /** Is the raw value zero at every point (for a component the exact arithmetic found to be 0)? */
-  vanishes(pick: (at: CurvatureAtPoint) => Decimal, scale: (at: CurvatureAtPoint) => Decimal): boolean {
-    return this.points.every(({ raw }) => pick(raw).abs().lte(this.D.max(1, scale(raw)).times(this.tolerance)));
-  }
-}
+/**
+ * Relative tolerance of every check, 1e-11: twenty orders of magnitude above
+ * double-double rounding, room for the cancellation in long raw sums (see
+ * cas/check/README.md, "The curvature sheet's numeric check").
+ */
+const DEFAULT_TOLERANCE = 1e-11;
+/** decimal.js digits when double-double's range does not suffice (one more than double-double carries). */
+const FALLBACK_DIGITS = 32;
 
 function display(geo: Geometry, f: RatFun, thorough: boolean, verify: (e: Expr) => boolean): Expr {
   const candidates = [fromRatFun(geo.ring, f, "factored"), fromRatFun(geo.ring, f, "expanded")];
@@ -116,6 +92,86 @@ function display(geo: Geometry, f: RatFun, thorough: boolean, verify: (e: Expr) 
   candidates.sort((a, b) => exprSize(a) - exprSize(b));
   for (const c of candidates) if (verify(c)) return c;
   throw new Error("internal error: no written form of a curvature component matched its unsimplified value");
+}
+
+interface ExactSheet {
+  readonly geo: Geometry;
+  readonly gamma: RatFun[][][];
+  readonly riem: RatFun[][][][];
+  readonly ric: RatFun[][];
+  readonly scalar: RatFun;
+  readonly ein: RatFun[][];
+  readonly k: RatFun;
+}
+
+interface VerifiedSheet {
+  readonly components: Pick<CurvatureSheet, "inverseMetric" | "christoffel" | "riemann" | "ricci" | "ricciScalar" | "einstein" | "kretschmann">;
+  readonly verification: CurvatureSheet["verification"];
+}
+
+type Entry<N> = { index: number[]; f: RatFun; pick: (at: CurvatureAtPoint<N>) => N; scale: (at: CurvatureAtPoint<N>) => N };
+
+/** Writes every component of the exact sheet in its shortest verified form; zero components are checked to vanish. */
+function verifiedSheet<N>(verifier: SheetVerifier<N>, exact: ExactSheet, thorough: boolean, tick: () => void): VerifiedSheet {
+  const { geo, gamma, riem, ric, scalar, ein, k } = exact;
+  const A = verifier.A;
+  const n = geo.n;
+  const list = (entries: Entry<N>[]): TensorComponent[] => {
+    const out: TensorComponent[] = [];
+    for (const { index, f, pick, scale } of entries) {
+      tick();
+      verifier.checked += 1;
+      if (rfIsZero(f)) {
+        if (!verifier.vanishes(pick, scale)) throw new Error(`internal error: component [${index.join(",")}] is exactly 0 but not numerically`);
+        continue;
+      }
+      out.push({ index, expr: display(geo, f, thorough, (e) => verifier.agrees(e, pick)) });
+    }
+    return out;
+  };
+  const pairs = (fn: (a: number, b: number) => void) => { for (let a = 0; a < n; a += 1) for (let b = a; b < n; b += 1) fn(a, b); };
+  // The size a zero component is measured against, once per tensor and point (not per component).
+  const memo = new Map<CurvatureAtPoint<N>, Map<string, N>>();
+  const maxOf = (at: CurvatureAtPoint<N>, key: string, xs: () => N[]) => {
+    let byTensor = memo.get(at);
+    if (!byTensor) memo.set(at, (byTensor = new Map()));
+    let v = byTensor.get(key);
+    if (v === undefined) {
+      v = A.abs(xs().reduce((m, x) => (A.size(x) > A.size(m) ? x : m)));
+      byTensor.set(key, v);
+    }
+    return v;
+  };
+  const ginvSize = (at: CurvatureAtPoint<N>) => maxOf(at, "g", () => at.ginv.flat());
+  const gammaSize = (at: CurvatureAtPoint<N>) => maxOf(at, "G", () => at.christoffel.flat(2));
+  const gammaSizeSquared = (at: CurvatureAtPoint<N>) => maxOf(at, "G2", () => [A.mul(gammaSize(at), gammaSize(at))]);
+  const riemannSize = (at: CurvatureAtPoint<N>) => maxOf(at, "R", () => at.riemann.flat(3));
+  const riemannSizeSquared = (at: CurvatureAtPoint<N>) => maxOf(at, "R2", () => [A.mul(riemannSize(at), riemannSize(at))]);
+  const inverseEntries: Entry<N>[] = [];
+  pairs((a, b) => inverseEntries.push({ index: [a, b], f: geo.ginv[a][b], pick: (at) => at.ginv[a][b], scale: ginvSize }));
+  const gammaEntries: Entry<N>[] = [];
+  for (let a = 0; a < n; a += 1) pairs((b, c) => gammaEntries.push({ index: [a, b, c], f: gamma[a][b][c], pick: (at) => at.christoffel[a][b][c], scale: gammaSize }));
+  const riemEntries: Entry<N>[] = [];
+  for (let a = 0; a < n; a += 1) for (let b = 0; b < n; b += 1) for (let c = 0; c < n; c += 1) for (let d = c + 1; d < n; d += 1) {
+    riemEntries.push({ index: [a, b, c, d], f: riem[a][b][c][d], pick: (at) => at.riemann[a][b][c][d], scale: gammaSizeSquared });
+  }
+  const ricciEntries: Entry<N>[] = [];
+  pairs((a, b) => ricciEntries.push({ index: [a, b], f: ric[a][b], pick: (at) => at.ricci[a][b], scale: riemannSize }));
+  const einsteinEntries: Entry<N>[] = [];
+  pairs((a, b) => einsteinEntries.push({ index: [a, b], f: ein[a][b], pick: (at) => at.einstein[a][b], scale: riemannSize }));
+  // R = g^{bd} R^a_{bad}: a zero R is measured against the size of what it sums.
+  const scalarSize = (at: CurvatureAtPoint<N>) => maxOf(at, "gR", () => [A.mul(ginvSize(at), riemannSize(at))]);
+  const scalarOf = (f: RatFun, pick: (at: CurvatureAtPoint<N>) => N, scale: Entry<N>["scale"]) => list([{ index: [], f, pick, scale }])[0]?.expr ?? ({ kind: "num", value: "0" } as Expr);
+  const components = {
+    inverseMetric: list(inverseEntries),
+    christoffel: list(gammaEntries),
+    riemann: list(riemEntries),
+    ricci: list(ricciEntries),
+    ricciScalar: scalarOf(scalar, (at) => at.ricciScalar, scalarSize),
+    einstein: list(einsteinEntries),
+    kretschmann: scalarOf(k, (at) => at.kretschmann, riemannSizeSquared),
+  };
+  return { components, verification: { points: verifier.points.length, digits: verifier.digits, tolerance: verifier.tolerance, checked: verifier.checked } };
 }
 
 /**
@@ -155,57 +211,31 @@ function* sheetStages(metric: Metric, options: CurvatureOptions): Generator<Curv
   const k = kretschmann(geo, riem, tick);
   yield finish("kretschmann");
 
-  const verifier = new Verifier(metric, options.points ?? 2, options.digits ?? 25);
+  const exact = { geo, gamma, riem, ric, scalar, ein, k };
   const thorough = options.thorough ?? false;
-  const n = geo.n;
-  const list = (entries: { index: number[]; f: RatFun; pick: (at: CurvatureAtPoint) => Decimal; scale: (at: CurvatureAtPoint) => Decimal }[]): TensorComponent[] => {
-    const out: TensorComponent[] = [];
-    for (const { index, f, pick, scale } of entries) {
-      tick();
-      verifier.checked += 1;
-      if (rfIsZero(f)) {
-        if (!verifier.vanishes(pick, scale)) throw new Error(`internal error: component [${index.join(",")}] is exactly 0 but not numerically`);
-        continue;
-      }
-      out.push({ index, expr: display(geo, f, thorough, (e) => verifier.agrees(e, pick)) });
+  const raw = rawDerivatives(metric);
+  const count = options.points ?? 2;
+  let verified: VerifiedSheet | null = null;
+  // Double-double unless digits are asked for; decimal.js when a value leaves double-double's range.
+  if (options.digits === undefined) {
+    try {
+      verified = verifiedSheet(new SheetVerifier(ddArithmetic, decimalContext(40), raw, count, DEFAULT_TOLERANCE), exact, thorough, tick);
+    } catch (err) {
+      if (!(err instanceof OutOfRangeError)) throw err;
     }
-    return out;
-  };
-  const pairs = (fn: (a: number, b: number) => void) => { for (let a = 0; a < n; a += 1) for (let b = a; b < n; b += 1) fn(a, b); };
-  // The size a zero component is measured against, once per tensor and point (not per component).
-  const memo = new Map<string, Decimal>();
-  const maxOfRaw = (xs: Decimal[]) => xs.reduce((m, x) => (x.abs().gt(m) ? x.abs() : m), xs[0].abs());
-  const maxOf = (xs: () => Decimal[], key: string) => {
-    let v = memo.get(key);
-    if (v === undefined) { v = maxOfRaw(xs()); memo.set(key, v); }
-    return v;
-  };
-  const pointKey = (at: CurvatureAtPoint) => String(verifier.points.findIndex((p) => p.raw === at));
-  const inverseEntries: Parameters<typeof list>[0] = [];
-  pairs((a, b) => inverseEntries.push({ index: [a, b], f: geo.ginv[a][b], pick: (at) => at.ginv[a][b], scale: (at) => maxOf(() => at.ginv.flat(), `g${pointKey(at)}`) }));
-  const gammaEntries: Parameters<typeof list>[0] = [];
-  for (let a = 0; a < n; a += 1) pairs((b, c) => gammaEntries.push({ index: [a, b, c], f: gamma[a][b][c], pick: (at) => at.christoffel[a][b][c], scale: (at) => maxOf(() => at.christoffel.flat(2), `G${pointKey(at)}`) }));
-  const riemEntries: Parameters<typeof list>[0] = [];
-  for (let a = 0; a < n; a += 1) for (let b = 0; b < n; b += 1) for (let c = 0; c < n; c += 1) for (let d = c + 1; d < n; d += 1) {
-    riemEntries.push({ index: [a, b, c, d], f: riem[a][b][c][d], pick: (at) => at.riemann[a][b][c][d], scale: (at) => maxOf(() => at.christoffel.flat(2), `G${pointKey(at)}`).pow(2) });
   }
-  const ricciEntries: Parameters<typeof list>[0] = [];
-  pairs((a, b) => ricciEntries.push({ index: [a, b], f: ric[a][b], pick: (at) => at.ricci[a][b], scale: (at) => maxOf(() => at.riemann.flat(3), `R${pointKey(at)}`) }));
-  const einsteinEntries: Parameters<typeof list>[0] = [];
-  pairs((a, b) => einsteinEntries.push({ index: [a, b], f: ein[a][b], pick: (at) => at.einstein[a][b], scale: (at) => maxOf(() => at.riemann.flat(3), `R${pointKey(at)}`) }));
-  const scalarOf = (f: RatFun, pick: (at: CurvatureAtPoint) => Decimal) => list([{ index: [], f, pick, scale: (at) => maxOf(() => at.riemann.flat(3), `R${pointKey(at)}`).pow(2) }])[0]?.expr ?? { kind: "num", value: "0" } as Expr;
+  if (verified === null) {
+    const digits = options.digits ?? FALLBACK_DIGITS;
+    const D = decimalContext(digits);
+    const tolerance = options.digits === undefined ? DEFAULT_TOLERANCE : 10 ** (14 - digits);
+    verified = verifiedSheet(new SheetVerifier(decimalArithmetic(D), D, raw, count, tolerance), exact, thorough, tick);
+  }
 
   const sheet = {
     coordinates: metric.coordinates,
     signature,
-    inverseMetric: list(inverseEntries),
-    christoffel: list(gammaEntries),
-    riemann: list(riemEntries),
-    ricci: list(ricciEntries),
-    ricciScalar: scalarOf(scalar, (at) => at.ricciScalar),
-    einstein: list(einsteinEntries),
-    kretschmann: scalarOf(k, (at) => at.kretschmann),
-    verification: { points: verifier.points.length, digits: verifier.digits, checked: verifier.checked },
+    ...verified.components,
+    verification: verified.verification,
     timings,
   };
   finish("display");

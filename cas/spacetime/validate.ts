@@ -1,7 +1,7 @@
-import type Decimal from "decimal.js";
-import { decimalContext, evaluateDecimal } from "../numeric/evaluate";
-import { jetify, randomSource, randomValues } from "../simplify/probe";
-import { freeVariables } from "../expr/traverse";
+import { decimalContext, type DecimalContext } from "../numeric/evaluate";
+import { ddArithmetic, decimalArithmetic, OutOfRangeError, type Arithmetic } from "../numeric/arithmetic";
+import { compileTree, fillSlots, SlotNames } from "../numeric/compile";
+import { freeNamesOf, freezeTrig, jetify, randomSource, randomValues } from "../simplify/probe";
 import { MetricError, type Metric } from "./metric";
 
 /** The signs of the metric's eigenvalues at the probe points. */
@@ -46,36 +46,49 @@ function eigenvalues(m: number[][]): number[] {
  * Checks a metric at random points: symmetric, non-degenerate (det ≠ 0), and
  * reports its signature. Throws a {@link MetricError} saying what is wrong.
  * The check is numeric (probabilistic): it samples points, it does not prove.
+ * Runs in double-double (31 digits, ample for the 1e-20 symmetry tolerance),
+ * in decimal.js at 30 digits when a value leaves double-double's range.
  *
  * @example
  * validateMetric(schwarzschild).text // "(-,+,+,+)"
  */
 export function validateMetric(metric: Metric, points = 3): Signature {
   const D = decimalContext(30);
-  const trees = metric.components.map((row) => row.map(jetify));
-  const names = new Set<string>();
-  trees.forEach((row) => row.forEach((e) => freeVariables(e).forEach((v) => names.add(v))));
+  try {
+    return validateIn(ddArithmetic, D, metric, points);
+  } catch (err) {
+    if (!(err instanceof OutOfRangeError)) throw err;
+    return validateIn(decimalArithmetic(D), D, metric, points);
+  }
+}
+
+function validateIn<N>(A: Arithmetic<N>, D: DecimalContext, metric: Metric, points: number): Signature {
+  const names = new SlotNames();
+  // sin/cos of a coordinate frozen to one name, computed once per point rather than once per entry.
+  const trees = metric.components.map((row) => row.map((e) => compileTree(A, freezeTrig(jetify(e)), names)));
+  const free = freeNamesOf(names.names);
   const next = randomSource(7);
   let found: Signature | null = null;
   let evaluated = 0;
   for (let attempt = 0; attempt < points * 6 && evaluated < points; attempt += 1) {
-    const values = randomValues(D, names, next);
-    // θ-like coordinates near π/2 keep sin θ well away from 0
-    let g: Decimal[][];
+    const slots: (N | undefined)[] = [];
+    fillSlots(A, names, randomValues(D, free, next), slots);
+    let g: N[][];
     try {
-      g = trees.map((row) => row.map((e) => evaluateDecimal(D, e, { values })));
-    } catch {
+      g = trees.map((row) => row.map((run) => run(slots as N[])));
+    } catch (err) {
+      if (err instanceof OutOfRangeError) throw err;
       continue;
     }
     evaluated += 1;
     const n = g.length;
     for (let a = 0; a < n; a += 1) for (let b = a + 1; b < n; b += 1) {
-      const scale = D.max(1, g[a][b].abs(), g[b][a].abs());
-      if (g[a][b].minus(g[b][a]).abs().gt(scale.times("1e-20"))) {
+      const scale = A.size(g[a][b]) >= A.size(g[b][a]) ? g[a][b] : g[b][a];
+      if (!A.negligible(A.sub(g[a][b], g[b][a]), scale, 1e-20)) {
         throw new MetricError(`the metric is not symmetric: g[${metric.coordinates[a]}][${metric.coordinates[b]}] ≠ g[${metric.coordinates[b]}][${metric.coordinates[a]}]`);
       }
     }
-    const eig = eigenvalues(g.map((row) => row.map((x) => x.toNumber())));
+    const eig = eigenvalues(g.map((row) => row.map((x) => A.toNumber(x))));
     const biggest = Math.max(...eig.map(Math.abs));
     if (eig.some((x) => Math.abs(x) <= 1e-12 * biggest)) throw new MetricError("the metric is degenerate (det = 0) at a probe point");
     const negative = eig.filter((x) => x < 0).length;

@@ -26,6 +26,7 @@ describe("curvature verb", () => {
     expect(sheet.conventions.signature).toBe("(-,+,+,+)");
     expect(String(sheet.conventions.riemann)).toContain("\\partial_c");
     expect(typeof sheet.timings.total).toBe("number");
+    expect(String(sheet.conventions.verification)).toMatch(/2 random points \(31-digit arithmetic, to within 1e-11 relative\).*not a proof/);
   });
 
   it("accepts a components matrix with a cross term", () => {

@@ -76,6 +76,25 @@ describe("curvature sheet: textbook checks", () => {
   });
 });
 
+describe("curvature sheet: how it is verified", () => {
+  it("checks in double-double by default, and in decimal.js when asked for digits", () => {
+    expect(computeCurvatureSync(M.metricOf(M.SCHWARZSCHILD)).verification).toEqual({ points: 2, digits: 31, tolerance: 1e-11, checked: 168 });
+    const decimal = computeCurvatureSync(M.metricOf(M.SCHWARZSCHILD), { digits: 40 });
+    expect(decimal.verification).toMatchObject({ points: 2, digits: 40 });
+    expect(decimal.verification.tolerance).toBeCloseTo(1e-26, 30);
+  });
+
+  it("falls back to decimal.js when values leave double-double's range", () => {
+    // Schwarzschild times the constant 10^-250: Γ and R^a_bcd are unchanged by a constant factor,
+    // R_ab too, so R = 0 and K = 12 r_s^2/r^6 · 10^500 (common practice, no source; MTW (1973) §31 for K).
+    const scaled = { ...M.SCHWARZSCHILD, components: M.SCHWARZSCHILD.components.map((row) => row.map((e) => (e === "0" ? e : `1e-250*(${e})`))) };
+    const sheet = computeCurvatureSync(M.metricOf(scaled));
+    expect(sheet.verification.digits).toBe(32);
+    expect(toPlain(sheet.ricciScalar)).toBe("0");
+    expect(equal(sheet.kretschmann, readPlainExpr("12e500*r_s^2/r^6"))).toBe("equal");
+  });
+});
+
 describe("curvature sheet: progress and cancellation", () => {
   it("reports each stage and can be aborted", async () => {
     const stages: string[] = [];
