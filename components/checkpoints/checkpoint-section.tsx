@@ -6,8 +6,8 @@ import { useId, useMemo, useState } from "react";
 import { fetchJson } from "@/components/data/api-client";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { PagedTable } from "@/components/ui/paged-table";
 import { CheckpointDiff } from "./checkpoint-diff";
-import { PagedTable } from "./paged-table";
 
 type Checkpoint = { id: string; kind: "manual" | "auto" | "before-restore"; label: string; createdByName: string | null; createdAt: string };
 

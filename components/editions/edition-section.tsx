@@ -4,10 +4,10 @@ import { useQuery } from "@tanstack/react-query";
 import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { useId, useMemo, useState } from "react";
-import { PagedTable } from "@/components/checkpoints/paged-table";
 import { fetchJson } from "@/components/data/api-client";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { PagedTable } from "@/components/ui/paged-table";
 import { PublishForm } from "./publish-form";
 
 type EditionRow = { number: number; title: string; sha256: string; reason: string | null; publishedByName: string | null; publishedAt: string; tally: Record<string, number>; url: string };
