@@ -6,3 +6,11 @@ export const newPasswordField = z
   .string()
   .min(8, "Use at least 8 characters.")
   .max(72, "Use at most 72 characters.");
+
+/** A new password typed twice; spread it into a form's fields and wrap the form's schema in `repeatMustMatch`. */
+export const newPasswordTwice = { password: newPasswordField, confirm: z.string() };
+
+/** A form with `newPasswordTwice` whose repeat differs is refused, with the mismatch reported on the repeat. */
+export function repeatMustMatch<Output extends { password: string; confirm: string }, Input>(schema: z.ZodType<Output, Input>) {
+  return schema.refine((values) => values.password === values.confirm, { path: ["confirm"], message: "The two passwords differ." });
+}

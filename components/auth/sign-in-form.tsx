@@ -7,11 +7,11 @@ import { signIn } from "next-auth/react";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
-import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { TextField } from "@/components/ui/text-field";
 import { describeSignInError } from "./safe-callback";
 import { emailField } from "./fields";
+import { SubmitButton, SubmitRow } from "./submit-button";
 import { useCsrfReady } from "./use-csrf-ready";
 
 const passwordSchema = z.object({ email: emailField, password: z.string().min(1, "Enter your password.") });
@@ -85,9 +85,7 @@ function PasswordForm({ callbackUrl, initialError, csrfReady }: { callbackUrl: s
         <Link href="/reset-password" className="text-sm">
           Forgot your password?
         </Link>
-        <Button type="submit" disabled={!csrfReady || formState.isSubmitting}>
-          {formState.isSubmitting ? "Signing in…" : "Sign in"}
-        </Button>
+        <SubmitButton sending={formState.isSubmitting} disabled={!csrfReady} label="Sign in" sendingLabel="Signing in…" />
       </div>
     </form>
   );
@@ -126,11 +124,7 @@ function LinkForm({ callbackUrl, csrfReady }: { callbackUrl: string; csrfReady: 
         error={formState.errors.email?.message}
         {...register("email")}
       />
-      <div className="flex justify-end">
-        <Button type="submit" disabled={!csrfReady || formState.isSubmitting}>
-          {formState.isSubmitting ? "Sending…" : "Send the sign-in link"}
-        </Button>
-      </div>
+      <SubmitRow sending={formState.isSubmitting} disabled={!csrfReady} label="Send the sign-in link" sendingLabel="Sending…" />
     </form>
   );
 }

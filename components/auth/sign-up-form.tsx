@@ -4,36 +4,34 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
-import { ApiError, fetchJson } from "@/components/data/api-client";
-import { Button } from "@/components/ui/button";
+import { fetchJson } from "@/components/data/api-client";
 import { Notice } from "@/components/ui/notice";
 import { TextField } from "@/components/ui/text-field";
-import { emailField, newPasswordField } from "./fields";
+import { emailField, newPasswordTwice, repeatMustMatch } from "./fields";
+import { NewPasswordFields } from "./new-password-fields";
+import { SubmitRow } from "./submit-button";
+import { useApiProblem } from "./use-api-problem";
 
-const signUpSchema = z
-  .object({
+const signUpSchema = repeatMustMatch(
+  z.object({
     name: z.string().trim().min(1, "Enter the name your co-authors will see.").max(100, "Use at most 100 characters."),
     email: emailField,
-    password: newPasswordField,
-    confirm: z.string(),
-  })
-  .refine((values) => values.password === values.confirm, { path: ["confirm"], message: "The two passwords differ." });
+    ...newPasswordTwice,
+  }),
+);
 type SignUpValues = z.infer<typeof signUpSchema>;
 
 export function SignUpForm() {
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const [problem, setProblem] = useState<string | null>(null);
+  const { problem, attempt } = useApiProblem("The account could not be created. Try again.");
   const { register, handleSubmit, formState } = useForm<SignUpValues>({ resolver: zodResolver(signUpSchema) });
 
-  const onSubmit = handleSubmit(async ({ name, email, password }) => {
-    setProblem(null);
-    try {
+  const onSubmit = handleSubmit(({ name, email, password }) =>
+    attempt(async () => {
       await fetchJson("/api/auth/signup", { method: "POST", json: { name, email, password } });
       setSentTo(email);
-    } catch (error) {
-      setProblem(error instanceof ApiError ? error.message : "The account could not be created. Try again.");
-    }
-  });
+    }),
+  );
 
   if (sentTo) {
     return (
@@ -47,26 +45,11 @@ export function SignUpForm() {
       {problem && <Notice kind="problem">{problem}</Notice>}
       <TextField label="Name" autoComplete="name" error={formState.errors.name?.message} {...register("name")} />
       <TextField label="E-mail" type="email" autoComplete="email" error={formState.errors.email?.message} {...register("email")} />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="new-password"
-        hint="At least 8 characters."
-        error={formState.errors.password?.message}
-        {...register("password")}
+      <NewPasswordFields
+        password={{ label: "Password", registration: register("password"), error: formState.errors.password }}
+        confirm={{ label: "Repeat the password", registration: register("confirm"), error: formState.errors.confirm }}
       />
-      <TextField
-        label="Repeat the password"
-        type="password"
-        autoComplete="new-password"
-        error={formState.errors.confirm?.message}
-        {...register("confirm")}
-      />
-      <div className="flex justify-end">
-        <Button type="submit" disabled={formState.isSubmitting}>
-          {formState.isSubmitting ? "Creating…" : "Create the account"}
-        </Button>
-      </div>
+      <SubmitRow sending={formState.isSubmitting} label="Create the account" sendingLabel="Creating…" />
     </form>
   );
 }
