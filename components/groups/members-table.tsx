@@ -1,23 +1,14 @@
 "use client";
 
-import {
-  createColumnHelper,
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getPaginationRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type ColumnFiltersState,
-  type SortingState,
-} from "@tanstack/react-table";
-import { useId, useMemo, useState } from "react";
+import { createColumnHelper, flexRender } from "@tanstack/react-table";
+import { useId, useMemo } from "react";
 import { useChangeRole, useRemoveMember } from "@/components/data/queries";
 import { roleLabel, roleLabels, roles, type Role } from "@/components/data/roles";
 import type { Member } from "@/components/data/types";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
+import { columnFilterText, setColumnFilterText, useClientTable } from "@/components/ui/use-client-table";
 
 const column = createColumnHelper<Member>();
 const roleOrder: Record<Role, number> = { lead: 0, author: 1, reviewer: 2, reader: 3 };
@@ -43,9 +34,6 @@ export function MembersTable({
   const changeRole = useChangeRole(groupId);
   const removeMember = useRemoveMember(groupId);
   const failure = changeRole.error ?? removeMember.error;
-  const [sorting, setSorting] = useState<SortingState>([{ id: "name", desc: false }]);
-  const [filters, setFilters] = useState<ColumnFiltersState>([]);
-  const [pagination, setPagination] = useState({ pageIndex: 0, pageSize: PAGE_SIZE });
 
   const columns = useMemo(() => {
     const whoOf = (member: Member) => member.name || member.email;
@@ -110,25 +98,7 @@ export function MembersTable({
     ];
   }, [manage, currentUserId, changeRole, removeMember]);
 
-  const table = useReactTable({
-    data: members,
-    columns,
-    state: { sorting, columnFilters: filters, pagination },
-    onSortingChange: setSorting,
-    onColumnFiltersChange: (updater) => {
-      setFilters(updater);
-      setPagination((current) => ({ ...current, pageIndex: 0 }));
-    },
-    onPaginationChange: setPagination,
-    // Pages reset where filters change above; TanStack's own reset on every new `data` identity could loop.
-    autoResetPageIndex: false,
-    enableSortingRemoval: false,
-    getCoreRowModel: getCoreRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getPaginationRowModel: getPaginationRowModel(),
-  });
-  const filterOf = (id: string) => (filters.find((f) => f.id === id)?.value as string | undefined) ?? "";
+  const table = useClientTable({ data: members, columns, initialSort: [{ id: "name", desc: false }], pageSize: PAGE_SIZE });
   const shown = table.getFilteredRowModel().rows.length;
 
   return (
@@ -142,15 +112,15 @@ export function MembersTable({
           <input
             id={searchId}
             type="search"
-            value={filterOf("name")}
-            onChange={(event) => table.getColumn("name")?.setFilterValue(event.target.value || undefined)}
+            value={columnFilterText(table, "name")}
+            onChange={(event) => setColumnFilterText(table, "name", event.target.value)}
             className="w-64 rounded-md border border-paper-edge bg-white/70 px-3 py-2"
           />
         </div>
         <SelectField
           label="Only the role"
-          value={filterOf("role")}
-          onChange={(event) => table.getColumn("role")?.setFilterValue(event.target.value || undefined)}
+          value={columnFilterText(table, "role")}
+          onChange={(event) => setColumnFilterText(table, "role", event.target.value)}
           options={[{ value: "", label: "any role" }, ...roles.map((role) => ({ value: role, label: roleLabels[role] }))]}
         />
         <p role="status" className="text-sm text-ink-muted">
@@ -209,7 +179,7 @@ export function MembersTable({
             Previous page
           </Button>
           <span>
-            Page {pagination.pageIndex + 1} of {table.getPageCount()}
+            Page {table.getState().pagination.pageIndex + 1} of {table.getPageCount()}
           </span>
           <Button tone="quiet" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
             Next page

@@ -1,19 +1,10 @@
 "use client";
 
-import {
-  createColumnHelper,
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getPaginationRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type ColumnFiltersState,
-  type SortingState,
-} from "@tanstack/react-table";
-import { useMemo, useState } from "react";
+import { createColumnHelper, flexRender } from "@tanstack/react-table";
+import { useMemo } from "react";
 import { Button } from "@/components/ui/button";
 import { SelectField } from "@/components/ui/select-field";
+import { columnFilterText, setColumnFilterText, useClientTable } from "@/components/ui/use-client-table";
 
 /** One thread as a row of the side list. */
 export type RemarkRow = {
@@ -40,10 +31,6 @@ const PAGE_SIZE = 8;
  * browser: a notebook has tens of threads, not thousands.
  */
 export function RemarksTable({ rows, selectedId, onOpen }: { rows: RemarkRow[]; selectedId: string | null; onOpen: (id: string) => void }) {
-  const [sorting, setSorting] = useState<SortingState>([{ id: "where", desc: false }]);
-  const [filters, setFilters] = useState<ColumnFiltersState>([{ id: "status", value: "open" }]);
-  const [pagination, setPagination] = useState({ pageIndex: 0, pageSize: PAGE_SIZE });
-
   const columns = useMemo(
     () => [
       column.accessor("order", {
@@ -74,28 +61,15 @@ export function RemarksTable({ rows, selectedId, onOpen }: { rows: RemarkRow[]; 
     [onOpen],
   );
 
-  const table = useReactTable({
+  const table = useClientTable({
     data: rows,
     columns,
-    state: { sorting, columnFilters: filters, pagination },
-    onSortingChange: setSorting,
-    onColumnFiltersChange: (updater) => {
-      setFilters(updater);
-      setPagination((current) => ({ ...current, pageIndex: 0 }));
-    },
-    onPaginationChange: setPagination,
-    // Pages reset where filters change above; TanStack's own reset on every new `data` identity could loop.
-    autoResetPageIndex: false,
-    enableSortingRemoval: false,
-    getCoreRowModel: getCoreRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getPaginationRowModel: getPaginationRowModel(),
+    initialSort: [{ id: "where", desc: false }],
+    initialFilters: [{ id: "status", value: "open" }],
+    pageSize: PAGE_SIZE,
   });
 
   const authors = [...new Map(rows.map((row) => [row.authorId, row.authorName])).entries()].sort((a, b) => a[1].localeCompare(b[1]));
-  const filterValue = (id: string) => (filters.find((f) => f.id === id)?.value as string | undefined) ?? "";
-  const setFilter = (id: string, value: string) => table.getColumn(id)?.setFilterValue(value || undefined);
   const shown = table.getFilteredRowModel().rows.length;
 
   return (
@@ -103,8 +77,8 @@ export function RemarksTable({ rows, selectedId, onOpen }: { rows: RemarkRow[]; 
       <div className="grid grid-cols-2 gap-2">
         <SelectField
           label="Show"
-          value={filterValue("status") || "all"}
-          onChange={(event) => setFilter("status", event.target.value)}
+          value={columnFilterText(table, "status") || "all"}
+          onChange={(event) => setColumnFilterText(table, "status", event.target.value)}
           options={[
             { value: "open", label: "open remarks" },
             { value: "settled", label: "settled remarks" },
@@ -113,8 +87,8 @@ export function RemarksTable({ rows, selectedId, onOpen }: { rows: RemarkRow[]; 
         />
         <SelectField
           label="Started by"
-          value={filterValue("author")}
-          onChange={(event) => setFilter("author", event.target.value)}
+          value={columnFilterText(table, "author")}
+          onChange={(event) => setColumnFilterText(table, "author", event.target.value)}
           options={[{ value: "", label: "anyone" }, ...authors.map(([id, name]) => ({ value: id, label: name }))]}
         />
       </div>
@@ -173,7 +147,7 @@ export function RemarksTable({ rows, selectedId, onOpen }: { rows: RemarkRow[]; 
             Previous page
           </Button>
           <span>
-            Page {pagination.pageIndex + 1} of {table.getPageCount()}
+            Page {table.getState().pagination.pageIndex + 1} of {table.getPageCount()}
           </span>
           <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
             Next page

@@ -1,19 +1,9 @@
 "use client";
 
-import {
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getPaginationRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type ColumnDef,
-  type ColumnFiltersState,
-  type PaginationState,
-  type SortingState,
-} from "@tanstack/react-table";
+import { flexRender, type ColumnDef, type ColumnFiltersState, type SortingState } from "@tanstack/react-table";
 import { useId, useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
+import { useClientTable } from "@/components/ui/use-client-table";
 
 /**
  * A table over a list already in the browser (a notebook's checkpoints or editions are few):
@@ -42,37 +32,15 @@ export function PagedTable<Row>({
   pageSize?: number;
 }) {
   const searchId = useId();
-  const [sorting, setSorting] = useState<SortingState>(initialSort);
-  const [globalFilter, setGlobalFilter] = useState("");
-  const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize });
-  // Back to the first page when the caller's filters change (adjusting state while rendering,
-  // not in an effect, so the page never shows an empty later page for a frame).
+  const table = useClientTable({ data, columns, initialSort, initialFilters: columnFilters, pageSize, sortingRemoval: true });
+  // The caller owns its filters; when they change, hand them to the table, which goes back to the
+  // first page (adjusting state while rendering, not in an effect, so no frame shows an empty later page).
   const filterKey = JSON.stringify(columnFilters ?? []);
   const [seenFilterKey, setSeenFilterKey] = useState(filterKey);
   if (filterKey !== seenFilterKey) {
     setSeenFilterKey(filterKey);
-    setPagination((current) => ({ ...current, pageIndex: 0 }));
+    table.setColumnFilters(columnFilters ?? []);
   }
-  const table = useReactTable({
-    data,
-    columns,
-    state: { sorting, globalFilter, columnFilters: columnFilters ?? [], pagination },
-    onSortingChange: setSorting,
-    onGlobalFilterChange: (updater) => {
-      setGlobalFilter(updater);
-      setPagination((current) => ({ ...current, pageIndex: 0 }));
-    },
-    onPaginationChange: setPagination,
-    globalFilterFn: "includesString",
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    getPaginationRowModel: getPaginationRowModel(),
-    // TanStack's automatic reset fires whenever `data` changes identity; a caller that maps its
-    // rows on every render would then reset, re-render and reset again without end (the page
-    // starves every other update). The resets above are the ones a reader expects.
-    autoResetPageIndex: false,
-  });
   const rows = table.getRowModel().rows;
   const total = table.getFilteredRowModel().rows.length;
   const { pageIndex } = table.getState().pagination;
@@ -87,7 +55,7 @@ export function PagedTable<Row>({
           <input
             id={searchId}
             type="search"
-            value={globalFilter}
+            value={table.getState().globalFilter as string}
             onChange={(event) => table.setGlobalFilter(event.target.value)}
             className="rounded-md border border-paper-edge bg-white/70 px-2 py-1 text-sm"
           />
