@@ -2,7 +2,6 @@
 
 import {
   createColumnHelper,
-  flexRender,
   getCoreRowModel,
   useReactTable,
   type PaginationState,
@@ -15,6 +14,7 @@ import { roleLabel } from "@/components/data/roles";
 import type { NotebookRow, NotebookSortKey } from "@/components/data/types";
 import { useDebouncedValue } from "@/components/data/use-debounced-value";
 import { Button } from "@/components/ui/button";
+import { DataTable, type DataTableLook } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
 
@@ -42,6 +42,17 @@ const columns = [
 ];
 
 const pageSizes = [10, 20, 50];
+const look: DataTableLook = {
+  frame: "overflow-x-auto rounded-lg border border-paper-edge bg-white/60",
+  table: "w-full border-collapse text-left text-sm",
+  head: "border-b border-paper-edge bg-paper-deep",
+  headerCell: "whitespace-nowrap px-4 py-2 font-medium text-ink-soft",
+  sortButton: "inline-flex items-center gap-1 rounded hover:text-ink",
+  sortGlyph: "w-3 text-xs",
+  row: "border-b border-paper-edge last:border-b-0 hover:bg-paper-deep/60",
+  cell: (columnId) => `px-4 py-3 align-top ${columnId === "title" ? "" : "whitespace-nowrap"}`,
+  empty: "px-4 py-8 text-center text-ink-muted",
+};
 
 export function NotebooksTable() {
   const filterId = useId();
@@ -108,65 +119,12 @@ export function NotebooksTable() {
 
       {isError && <Notice kind="problem">{error.message}</Notice>}
 
-      <div className="overflow-x-auto rounded-lg border border-paper-edge bg-white/60">
-        <table className="w-full border-collapse text-left text-sm">
-          <caption className="sr-only">Notebooks you can open, {total} in all</caption>
-          <thead className="border-b border-paper-edge bg-paper-deep">
-            {table.getHeaderGroups().map((headerGroup) => (
-              <tr key={headerGroup.id}>
-                {headerGroup.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const label = flexRender(header.column.columnDef.header, header.getContext());
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
-                      className="whitespace-nowrap px-4 py-2 font-medium text-ink-soft"
-                    >
-                      {header.column.getCanSort() ? (
-                        <button
-                          type="button"
-                          onClick={header.column.getToggleSortingHandler()}
-                          className="inline-flex items-center gap-1 rounded hover:text-ink"
-                        >
-                          {label}
-                          <span aria-hidden="true" className="w-3 text-xs">
-                            {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}
-                          </span>
-                          <span className="sr-only">
-                            {sorted ? `, sorted ${sorted === "asc" ? "ascending" : "descending"}` : ", not sorted"}
-                          </span>
-                        </button>
-                      ) : (
-                        label
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-b border-paper-edge last:border-b-0 hover:bg-paper-deep/60">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`px-4 py-3 align-top ${cell.column.id === "title" ? "" : "whitespace-nowrap"}`}>
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-            {!isPending && table.getRowModel().rows.length === 0 && (
-              <tr>
-                <td colSpan={columns.length} className="px-4 py-8 text-center text-ink-muted">
-                  {q ? `No notebook title contains “${q}”.` : "No notebooks yet."}
-                </td>
-              </tr>
-            )}
-          </tbody>
-        </table>
-      </div>
+      <DataTable
+        table={table}
+        caption={`Notebooks you can open, ${total} in all`}
+        look={look}
+        empty={!isPending && table.getRowModel().rows.length === 0 && (q ? `No notebook title contains “${q}”.` : "No notebooks yet.")}
+      />
 
       <nav aria-label="Notebook pages" className="flex flex-wrap items-center justify-between gap-3 text-sm">
         <SelectField

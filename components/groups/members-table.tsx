@@ -1,11 +1,12 @@
 "use client";
 
-import { createColumnHelper, flexRender } from "@tanstack/react-table";
+import { createColumnHelper } from "@tanstack/react-table";
 import { useId, useMemo } from "react";
 import { useChangeRole, useRemoveMember } from "@/components/data/queries";
 import { roleLabel, roleLabels, roles, type Role } from "@/components/data/roles";
 import type { Member } from "@/components/data/types";
 import { Button } from "@/components/ui/button";
+import { DataTable, type DataTableLook } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
 import { columnFilterText, setColumnFilterText, useClientTable } from "@/components/ui/use-client-table";
@@ -13,6 +14,17 @@ import { columnFilterText, setColumnFilterText, useClientTable } from "@/compone
 const column = createColumnHelper<Member>();
 const roleOrder: Record<Role, number> = { lead: 0, author: 1, reviewer: 2, reader: 3 };
 const PAGE_SIZE = 10;
+const look: DataTableLook = {
+  frame: "overflow-x-auto",
+  table: "w-full text-left text-sm",
+  head: "border-b border-paper-edge text-ink-soft",
+  headerCell: "py-2 pr-4 font-medium",
+  sortButton: "inline-flex items-center gap-1 hover:text-ink",
+  sortGlyph: "text-xs",
+  row: "border-b border-paper-edge last:border-b-0",
+  cell: (columnId) => `py-2 pr-4 ${columnId === "actions" ? "text-right" : ""}`,
+  empty: "py-4 text-center text-ink-muted",
+};
 
 /**
  * Members with their roles: filter by name or address and by role, sort by any column,
@@ -127,52 +139,7 @@ export function MembersTable({
           {shown} of {members.length} member{members.length === 1 ? "" : "s"}
         </p>
       </div>
-      <div className="overflow-x-auto">
-        <table className="w-full text-left text-sm">
-          <caption className="sr-only">Members of the group and their roles</caption>
-          <thead className="border-b border-paper-edge text-ink-soft">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const label = flexRender(header.column.columnDef.header, header.getContext());
-                  return (
-                    <th key={header.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined} className="py-2 pr-4 font-medium">
-                      {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-ink">
-                          {label}
-                          <span aria-hidden="true" className="text-xs">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
-                          <span className="sr-only">{sorted ? `, sorted ${sorted === "asc" ? "ascending" : "descending"}` : ", not sorted"}</span>
-                        </button>
-                      ) : (
-                        label
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-b border-paper-edge last:border-b-0">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`py-2 pr-4 ${cell.column.id === "actions" ? "text-right" : ""}`}>
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-            {shown === 0 && (
-              <tr>
-                <td colSpan={columns.length} className="py-4 text-center text-ink-muted">
-                  No member matches these filters.
-                </td>
-              </tr>
-            )}
-          </tbody>
-        </table>
-      </div>
+      <DataTable table={table} caption="Members of the group and their roles" look={look} empty={shown === 0 && "No member matches these filters."} />
       {table.getPageCount() > 1 && (
         <nav aria-label="Member pages" className="flex items-center justify-between text-sm">
           <Button tone="quiet" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>

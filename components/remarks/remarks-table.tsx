@@ -1,8 +1,9 @@
 "use client";
 
-import { createColumnHelper, flexRender } from "@tanstack/react-table";
+import { createColumnHelper } from "@tanstack/react-table";
 import { useMemo } from "react";
 import { Button } from "@/components/ui/button";
+import { DataTable, type DataTableLook } from "@/components/ui/data-table";
 import { SelectField } from "@/components/ui/select-field";
 import { columnFilterText, setColumnFilterText, useClientTable } from "@/components/ui/use-client-table";
 
@@ -24,6 +25,16 @@ const column = createColumnHelper<RemarkRow>();
 const shortTime = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" });
 
 const PAGE_SIZE = 8;
+const look: DataTableLook = {
+  frame: "overflow-x-auto rounded border border-paper-edge bg-white/60",
+  table: "w-full text-left text-xs",
+  head: "border-b border-paper-edge bg-paper-deep text-ink-soft",
+  headerCell: "whitespace-nowrap px-2 py-1.5 font-medium",
+  sortButton: "inline-flex items-center gap-0.5 hover:text-ink",
+  row: "border-b border-paper-edge align-top last:border-b-0 aria-selected:bg-accent-wash",
+  cell: "px-2 py-1.5",
+  empty: "px-2 py-4 text-center text-ink-muted",
+};
 
 /**
  * The side list of remark threads: filter by open/settled and by who started a thread,
@@ -95,52 +106,13 @@ export function RemarksTable({ rows, selectedId, onOpen }: { rows: RemarkRow[]; 
       <p role="status" className="text-xs text-ink-muted">
         {shown} thread{shown === 1 ? "" : "s"} shown of {rows.length}
       </p>
-      <div className="overflow-x-auto rounded border border-paper-edge bg-white/60">
-        <table className="w-full text-left text-xs">
-          <caption className="sr-only">Remark threads on this notebook</caption>
-          <thead className="border-b border-paper-edge bg-paper-deep text-ink-soft">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const label = flexRender(header.column.columnDef.header, header.getContext());
-                  return (
-                    <th key={header.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined} className="whitespace-nowrap px-2 py-1.5 font-medium">
-                      {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-0.5 hover:text-ink">
-                          {label}
-                          <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
-                          <span className="sr-only">{sorted ? `, sorted ${sorted === "asc" ? "ascending" : "descending"}` : ", not sorted"}</span>
-                        </button>
-                      ) : (
-                        label
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} aria-selected={row.original.id === selectedId} className="border-b border-paper-edge align-top last:border-b-0 aria-selected:bg-accent-wash">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-2 py-1.5">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-            {shown === 0 && (
-              <tr>
-                <td colSpan={columns.length} className="px-2 py-4 text-center text-ink-muted">
-                  {rows.length === 0 ? "No remarks yet." : "No thread matches these filters."}
-                </td>
-              </tr>
-            )}
-          </tbody>
-        </table>
-      </div>
+      <DataTable
+        table={table}
+        caption="Remark threads on this notebook"
+        look={look}
+        empty={shown === 0 && (rows.length === 0 ? "No remarks yet." : "No thread matches these filters.")}
+        rowAttributes={(row) => ({ "aria-selected": row.original.id === selectedId })}
+      />
       {table.getPageCount() > 1 && (
         <nav aria-label="Remark pages" className="flex items-center justify-between text-xs">
           <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>

@@ -1,9 +1,21 @@
 "use client";
 
-import { flexRender, type ColumnDef, type ColumnFiltersState, type SortingState } from "@tanstack/react-table";
+import type { ColumnDef, ColumnFiltersState, SortingState } from "@tanstack/react-table";
 import { useId, useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
+import { DataTable, type DataTableLook } from "@/components/ui/data-table";
 import { useClientTable } from "@/components/ui/use-client-table";
+
+const look: DataTableLook = {
+  frame: "overflow-x-auto",
+  table: "w-full text-left text-sm",
+  head: "border-b border-paper-edge text-ink-soft",
+  headerCell: "py-1.5 pr-3 font-medium",
+  sortButton: "inline-flex items-center gap-1",
+  row: "border-b border-paper-edge last:border-b-0 align-top",
+  cell: "py-1.5 pr-3",
+  empty: "py-3 text-ink-muted",
+};
 
 /**
  * A table over a list already in the browser (a notebook's checkpoints or editions are few):
@@ -41,7 +53,6 @@ export function PagedTable<Row>({
     setSeenFilterKey(filterKey);
     table.setColumnFilters(columnFilters ?? []);
   }
-  const rows = table.getRowModel().rows;
   const total = table.getFilteredRowModel().rows.length;
   const { pageIndex } = table.getState().pagination;
 
@@ -62,56 +73,7 @@ export function PagedTable<Row>({
         </div>
         {filters}
       </div>
-      <div className="overflow-x-auto">
-        <table className="w-full text-left text-sm">
-          <caption className="sr-only">{caption}</caption>
-          <thead className="border-b border-paper-edge text-ink-soft">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      className="py-1.5 pr-3 font-medium"
-                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
-                    >
-                      {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1">
-                          {flexRender(header.column.columnDef.header, header.getContext())}
-                          <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
-                        </button>
-                      ) : (
-                        flexRender(header.column.columnDef.header, header.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {rows.length === 0 ? (
-              <tr>
-                <td colSpan={columns.length} className="py-3 text-ink-muted">
-                  {emptyText}
-                </td>
-              </tr>
-            ) : (
-              rows.map((row) => (
-                <tr key={row.id} className="border-b border-paper-edge last:border-b-0 align-top">
-                  {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className="py-1.5 pr-3">
-                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                    </td>
-                  ))}
-                </tr>
-              ))
-            )}
-          </tbody>
-        </table>
-      </div>
+      <DataTable table={table} caption={caption} look={look} empty={table.getRowModel().rows.length === 0 && emptyText} sayOrder={false} />
       {total > table.getState().pagination.pageSize && (
         <div className="flex items-center gap-2 text-xs">
           <Button tone="quiet" className="!px-2 !py-1" disabled={!table.getCanPreviousPage()} onClick={() => table.previousPage()}>
