@@ -1,23 +1,10 @@
-import { expect, test, type Browser, type Page } from "@playwright/test";
-import { DashboardPage } from "./pages/dashboard-page";
+import { expect, test } from "@playwright/test";
 import { SharedEditor } from "./pages/shared-editor";
-import { SignInPage } from "./pages/sign-in-page";
-import { demoAccounts, demoPassword } from "./support/demo-accounts";
+import { demoAccounts } from "./support/demo-accounts";
+import { openAs } from "./support/open-notebook";
 import { demoAccounts as demoPeople } from "@/db/demo/people";
 
 const nameOf = (email: string) => demoPeople.find((p) => p.email === email)!.name;
-
-async function openAs(browser: Browser, email: string, title: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(email, demoPassword);
-  const dashboard = new DashboardPage(page);
-  await dashboard.expectLoaded();
-  await dashboard.openNotebook(title);
-  await new SharedEditor(page).waitUntilOpen();
-  return page;
-}
 
 const notebook = "Test-particle orbits around Kestrel-7";
 

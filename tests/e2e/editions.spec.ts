@@ -1,9 +1,7 @@
 import { expect, test } from "@playwright/test";
-import { DashboardPage } from "./pages/dashboard-page";
 import { EditionPage, EditionRecords } from "./pages/edition-records";
-import { SharedEditor } from "./pages/shared-editor";
-import { SignInPage } from "./pages/sign-in-page";
-import { demoAccounts, demoPassword } from "./support/demo-accounts";
+import { demoAccounts } from "./support/demo-accounts";
+import { openAs } from "./support/open-notebook";
 
 const notebook = "Test-particle orbits around Kestrel-7";
 
@@ -11,14 +9,7 @@ test("the group lead publishes an edition of a demo notebook; its permanent link
   // Several browsers, each checking the notebook's steps in its own worker: slow on two cores.
   test.slow();
   test.setTimeout(240_000);
-  const lead = await (await browser.newContext()).newPage();
-  const signIn = new SignInPage(lead);
-  await signIn.open();
-  await signIn.signIn(demoAccounts.lead, demoPassword);
-  const dashboard = new DashboardPage(lead);
-  await dashboard.expectLoaded();
-  await dashboard.openNotebook(notebook);
-  await new SharedEditor(lead).waitUntilOpen();
+  const lead = await openAs(browser, demoAccounts.lead, notebook);
 
   const link = await new EditionRecords(lead).publish();
   expect(link).toMatch(/\/editions\/[0-9a-f-]{36}\/1$/);

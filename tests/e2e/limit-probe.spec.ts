@@ -1,20 +1,12 @@
 import { expect, test } from "@playwright/test";
-import { DashboardPage } from "./pages/dashboard-page";
-import { SharedEditor } from "./pages/shared-editor";
-import { SignInPage } from "./pages/sign-in-page";
-import { demoAccounts, demoPassword } from "./support/demo-accounts";
+import { demoAccounts } from "./support/demo-accounts";
+import { signInAndOpen } from "./support/open-notebook";
 
 // Kestrel-7's step 15 is the Schwarzschild effective potential with test mass μ,
 // V_eff = −GMμ/r + L²/(2μr²) − GML²/(μc²r³) (Hartle, Gravity (2003) §9.3, from memory): as c → ∞
 // the last term vanishes like c^−2 and the Newtonian two stay (Goldstein, Classical Mechanics §3.3).
 test("a reader probes the c → ∞ limit of the effective potential: the relativistic term vanishes, the Newtonian terms stay", async ({ page }) => {
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(demoAccounts.reader, demoPassword);
-  const dashboard = new DashboardPage(page);
-  await dashboard.expectLoaded();
-  await dashboard.openNotebook("Test-particle orbits around Kestrel-7");
-  await new SharedEditor(page).waitUntilOpen();
+  await signInAndOpen(page, demoAccounts.reader, "Test-particle orbits around Kestrel-7");
 
   await page.getByRole("button", { name: "Probe a limit of step 15" }).click();
   const probe = page.getByRole("region", { name: "Limit probe of step 15" });

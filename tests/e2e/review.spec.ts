@@ -1,34 +1,21 @@
-import { expect, test, type Browser, type Page } from "@playwright/test";
-import { DashboardPage } from "./pages/dashboard-page";
+import { expect, test } from "@playwright/test";
 import { RemarksPanel } from "./pages/remarks-panel";
 import { SharedEditor } from "./pages/shared-editor";
-import { SignInPage } from "./pages/sign-in-page";
-import { demoAccounts, demoPassword } from "./support/demo-accounts";
+import { demoAccounts } from "./support/demo-accounts";
 import { mailroomAvailable } from "./support/mailroom";
+import { openAs } from "./support/open-notebook";
 
 // db/demo: the Vesper-3 Reissner–Nordström draft; its step 17 has a deliberate sign slip in the last term.
 const notebook = "Charged-hole orbits: Vesper-3";
 const slipped = "V_{\\rm eff} = -\\frac{GM\\mu}{r} + \\frac{\\mu c^2 r_Q^2}{2r^2} + \\frac{L^2}{2\\mu r^2} - \\frac{GML^2}{\\mu c^2 r^3} - \\frac{L^2 r_Q^2}{2\\mu r^4}";
 const fixed = slipped.replace(/- \\frac\{L\^2 r_Q\^2\}/, "+ \\frac{L^2 r_Q^2}");
 
-async function openAs(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(email, demoPassword);
-  const dashboard = new DashboardPage(page);
-  await dashboard.expectLoaded();
-  await dashboard.openNotebook(notebook);
-  await new SharedEditor(page).waitUntilOpen();
-  return page;
-}
-
 test("a reviewer remarks on the refuted step; the author is mailed, sees it, fixes the step and settles it", async ({ browser }) => {
   // Several browsers, each checking the notebook's steps in its own worker: slow on two cores.
   test.slow();
   const remark = `The last term of step 17 has the wrong sign (${Date.now().toString(36)}).`;
 
-  const reviewer = await openAs(browser, demoAccounts.reviewer);
+  const reviewer = await openAs(browser, demoAccounts.reviewer, notebook);
   // A reviewer cannot change the text, but can remark on it.
   await expect(new SharedEditor(reviewer).text()).toHaveAttribute("contenteditable", "false");
   const reviewerRemarks = new RemarksPanel(reviewer);
@@ -43,7 +30,7 @@ test("a reviewer remarks on the refuted step; the author is mailed, sees it, fix
     expect(mails.messages.some((m: { kind: string; text: string }) => m.kind === "remark" && m.text.includes(remark))).toBe(true);
   }
 
-  const author = await openAs(browser, demoAccounts.coauthor);
+  const author = await openAs(browser, demoAccounts.coauthor, notebook);
   const authorRemarks = new RemarksPanel(author);
   await expect(authorRemarks.threads()).toContainText(remark);
   await expect(author.getByRole("button", { name: /^Remark on step 17, 1 open/ })).toBeVisible();
@@ -70,7 +57,7 @@ test("a reviewer remarks on the refuted step; the author is mailed, sees it, fix
 });
 
 test("a reader reads remarks but has no remark button", async ({ browser }) => {
-  const reader = await openAs(browser, demoAccounts.reader);
+  const reader = await openAs(browser, demoAccounts.reader, notebook);
   await expect(new RemarksPanel(reader).region()).toBeVisible();
   await expect(reader.getByRole("button", { name: /^Remark on step/ })).toHaveCount(0);
   await expect(reader.getByRole("button", { name: "Remark on the selected text" })).toHaveCount(0);

@@ -1,22 +1,10 @@
-import { expect, test, type Page } from "@playwright/test";
-import { DashboardPage } from "./pages/dashboard-page";
-import { SharedEditor } from "./pages/shared-editor";
-import { SignInPage } from "./pages/sign-in-page";
+import { expect, test } from "@playwright/test";
 import { SpacetimeBlockPanel } from "./pages/spacetime-block";
-import { demoAccounts, demoPassword } from "./support/demo-accounts";
-
-async function openDemoNotebook(page: Page, title: string) {
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(demoAccounts.author, demoPassword);
-  const dashboard = new DashboardPage(page);
-  await dashboard.expectLoaded();
-  await dashboard.openNotebook(title);
-  await new SharedEditor(page).waitUntilOpen();
-}
+import { demoAccounts } from "./support/demo-accounts";
+import { signInAndOpen } from "./support/open-notebook";
 
 test("an author opens the curvature sheet and the orbit panel of the Kestrel-7 spacetime block", async ({ page }) => {
-  await openDemoNotebook(page, "Test-particle orbits around Kestrel-7");
+  await signInAndOpen(page, demoAccounts.author, "Test-particle orbits around Kestrel-7");
   const block = new SpacetimeBlockPanel(page, /Kestrel-7 exterior/);
 
   const sheet = await block.openCurvatureSheet();
