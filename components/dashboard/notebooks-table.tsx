@@ -13,9 +13,9 @@ import { useNotebookPage } from "@/components/data/queries";
 import { roleLabel } from "@/components/data/roles";
 import type { NotebookRow, NotebookSortKey } from "@/components/data/types";
 import { useDebouncedValue } from "@/components/data/use-debounced-value";
-import { Button } from "@/components/ui/button";
 import { DataTable, type DataTableLook } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
+import { PageButtons } from "@/components/ui/page-buttons";
 import { SelectField } from "@/components/ui/select-field";
 
 const column = createColumnHelper<NotebookRow>();
@@ -135,15 +135,7 @@ export function NotebooksTable() {
           options={pageSizes.map((size) => ({ value: String(size), label: String(size) }))}
         />
         <div className="flex items-center gap-3">
-          <Button tone="quiet" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
-            Previous page
-          </Button>
-          <span>
-            Page {pagination.pageIndex + 1} of {pageCount}
-          </span>
-          <Button tone="quiet" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
-            Next page
-          </Button>
+          <PageButtons table={table} />
         </div>
       </nav>
     </div>

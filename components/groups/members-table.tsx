@@ -8,6 +8,7 @@ import type { Member } from "@/components/data/types";
 import { Button } from "@/components/ui/button";
 import { DataTable, type DataTableLook } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
+import { PageButtons } from "@/components/ui/page-buttons";
 import { SelectField } from "@/components/ui/select-field";
 import { columnFilterText, setColumnFilterText, useClientTable } from "@/components/ui/use-client-table";
 
@@ -142,15 +143,7 @@ export function MembersTable({
       <DataTable table={table} caption="Members of the group and their roles" look={look} empty={shown === 0 && "No member matches these filters."} />
       {table.getPageCount() > 1 && (
         <nav aria-label="Member pages" className="flex items-center justify-between text-sm">
-          <Button tone="quiet" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
-            Previous page
-          </Button>
-          <span>
-            Page {table.getState().pagination.pageIndex + 1} of {table.getPageCount()}
-          </span>
-          <Button tone="quiet" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
-            Next page
-          </Button>
+          <PageButtons table={table} />
         </nav>
       )}
     </div>

@@ -2,8 +2,8 @@
 
 import { createColumnHelper } from "@tanstack/react-table";
 import { useMemo } from "react";
-import { Button } from "@/components/ui/button";
 import { DataTable, type DataTableLook } from "@/components/ui/data-table";
+import { PageButtons } from "@/components/ui/page-buttons";
 import { SelectField } from "@/components/ui/select-field";
 import { columnFilterText, setColumnFilterText, useClientTable } from "@/components/ui/use-client-table";
 
@@ -115,15 +115,7 @@ export function RemarksTable({ rows, selectedId, onOpen }: { rows: RemarkRow[]; 
       />
       {table.getPageCount() > 1 && (
         <nav aria-label="Remark pages" className="flex items-center justify-between text-xs">
-          <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
-            Previous page
-          </Button>
-          <span>
-            Page {table.getState().pagination.pageIndex + 1} of {table.getPageCount()}
-          </span>
-          <Button tone="quiet" className="px-2 py-1 text-xs" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
-            Next page
-          </Button>
+          <PageButtons table={table} buttonClassName="px-2 py-1 text-xs" />
         </nav>
       )}
     </div>

@@ -2,8 +2,8 @@
 
 import type { ColumnDef, ColumnFiltersState, SortingState } from "@tanstack/react-table";
 import { useId, useState, type ReactNode } from "react";
-import { Button } from "@/components/ui/button";
 import { DataTable, type DataTableLook } from "@/components/ui/data-table";
+import { PageButtons } from "@/components/ui/page-buttons";
 import { useClientTable } from "@/components/ui/use-client-table";
 
 const look: DataTableLook = {
@@ -54,7 +54,6 @@ export function PagedTable<Row>({
     table.setColumnFilters(columnFilters ?? []);
   }
   const total = table.getFilteredRowModel().rows.length;
-  const { pageIndex } = table.getState().pagination;
 
   return (
     <div className="space-y-2">
@@ -76,15 +75,7 @@ export function PagedTable<Row>({
       <DataTable table={table} caption={caption} look={look} empty={table.getRowModel().rows.length === 0 && emptyText} sayOrder={false} />
       {total > table.getState().pagination.pageSize && (
         <div className="flex items-center gap-2 text-xs">
-          <Button tone="quiet" className="!px-2 !py-1" disabled={!table.getCanPreviousPage()} onClick={() => table.previousPage()}>
-            Earlier page
-          </Button>
-          <span>
-            Page {pageIndex + 1} of {table.getPageCount()} ({total} rows)
-          </span>
-          <Button tone="quiet" className="!px-2 !py-1" disabled={!table.getCanNextPage()} onClick={() => table.nextPage()}>
-            Later page
-          </Button>
+          <PageButtons table={table} previousText="Earlier page" nextText="Later page" buttonClassName="!px-2 !py-1" countSuffix={` (${total} rows)`} />
         </div>
       )}
     </div>
