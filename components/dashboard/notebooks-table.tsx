@@ -43,15 +43,15 @@ const columns = [
 
 const pageSizes = [10, 20, 50];
 const look: DataTableLook = {
-  frame: "overflow-x-auto rounded-lg border border-paper-edge bg-white/60",
-  table: "w-full border-collapse text-left text-sm",
-  head: "border-b border-paper-edge bg-paper-deep",
-  headerCell: "whitespace-nowrap px-4 py-2 font-medium text-ink-soft",
-  sortButton: "inline-flex items-center gap-1 rounded hover:text-ink",
+  frame: "rounded-lg border border-paper-edge bg-white/60",
+  table: "border-collapse text-sm",
+  head: "bg-paper-deep",
+  headerCell: "whitespace-nowrap px-4 py-2 text-ink-soft",
+  sortButton: "gap-1 rounded hover:text-ink",
   sortGlyph: "w-3 text-xs",
-  row: "border-b border-paper-edge last:border-b-0 hover:bg-paper-deep/60",
+  row: "hover:bg-paper-deep/60",
   cell: (columnId) => `px-4 py-3 align-top ${columnId === "title" ? "" : "whitespace-nowrap"}`,
-  empty: "px-4 py-8 text-center text-ink-muted",
+  empty: "px-4 py-8 text-center",
 };
 
 export function NotebooksTable() {

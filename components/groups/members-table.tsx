@@ -16,15 +16,13 @@ const column = createColumnHelper<Member>();
 const roleOrder: Record<Role, number> = { lead: 0, author: 1, reviewer: 2, reader: 3 };
 const PAGE_SIZE = 10;
 const look: DataTableLook = {
-  frame: "overflow-x-auto",
-  table: "w-full text-left text-sm",
-  head: "border-b border-paper-edge text-ink-soft",
-  headerCell: "py-2 pr-4 font-medium",
-  sortButton: "inline-flex items-center gap-1 hover:text-ink",
+  table: "text-sm",
+  head: "text-ink-soft",
+  headerCell: "py-2 pr-4",
+  sortButton: "gap-1 hover:text-ink",
   sortGlyph: "text-xs",
-  row: "border-b border-paper-edge last:border-b-0",
   cell: (columnId) => `py-2 pr-4 ${columnId === "actions" ? "text-right" : ""}`,
-  empty: "py-4 text-center text-ink-muted",
+  empty: "py-4 text-center",
 };
 
 /**

@@ -26,14 +26,14 @@ const shortTime = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "sho
 
 const PAGE_SIZE = 8;
 const look: DataTableLook = {
-  frame: "overflow-x-auto rounded border border-paper-edge bg-white/60",
-  table: "w-full text-left text-xs",
-  head: "border-b border-paper-edge bg-paper-deep text-ink-soft",
-  headerCell: "whitespace-nowrap px-2 py-1.5 font-medium",
-  sortButton: "inline-flex items-center gap-0.5 hover:text-ink",
-  row: "border-b border-paper-edge align-top last:border-b-0 aria-selected:bg-accent-wash",
+  frame: "rounded border border-paper-edge bg-white/60",
+  table: "text-xs",
+  head: "bg-paper-deep text-ink-soft",
+  headerCell: "whitespace-nowrap px-2 py-1.5",
+  sortButton: "gap-0.5 hover:text-ink",
+  row: "align-top aria-selected:bg-accent-wash",
   cell: "px-2 py-1.5",
-  empty: "px-2 py-4 text-center text-ink-muted",
+  empty: "px-2 py-4 text-center",
 };
 
 /**

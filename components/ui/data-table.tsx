@@ -1,20 +1,25 @@
 import { flexRender, type Header, type Row, type Table } from "@tanstack/react-table";
 import type { HTMLAttributes, ReactNode } from "react";
 
-/** Each table keeps its own spacing and frame; the structure, roles and names are shared. */
+/**
+ * What one table adds to the shared classes (its spacing, text size, frame and hover); the
+ * structure, roles and names are the same for all.
+ */
 export type DataTableLook = {
   /** The scrolling box around the table. */
-  frame: string;
-  table: string;
-  head: string;
-  headerCell: string;
-  sortButton: string;
+  frame?: string;
+  table?: string;
+  head?: string;
+  headerCell?: string;
+  sortButton?: string;
   sortGlyph?: string;
-  row: string;
+  row?: string;
   /** One class list for every cell, or one per column id. */
-  cell: string | ((columnId: string) => string);
-  empty: string;
+  cell?: string | ((columnId: string) => string);
+  empty?: string;
 };
+
+const withShared = (shared: string, own: string | undefined) => (own ? `${shared} ${own}` : shared);
 
 /**
  * A TanStack table drawn as a captioned `<table>`: sortable headers are buttons, the header cell
@@ -24,14 +29,14 @@ export type DataTableLook = {
 export function DataTable<TData>({
   table,
   caption,
-  look,
+  look = {},
   empty,
   sayOrder = true,
   rowAttributes,
 }: {
   table: Table<TData>;
   caption: string;
-  look: DataTableLook;
+  look?: DataTableLook;
   /** The text of a row shown when there is nothing to list; false or absent draws no such row. */
   empty?: ReactNode;
   /** Whether a sort button's name also says the order (", sorted ascending"); aria-sort says it either way. */
@@ -39,10 +44,10 @@ export function DataTable<TData>({
   rowAttributes?: (row: Row<TData>) => HTMLAttributes<HTMLTableRowElement>;
 }) {
   return (
-    <div className={look.frame}>
-      <table className={look.table}>
+    <div className={withShared("overflow-x-auto", look.frame)}>
+      <table className={withShared("w-full text-left", look.table)}>
         <caption className="sr-only">{caption}</caption>
-        <thead className={look.head}>
+        <thead className={withShared("border-b border-paper-edge", look.head)}>
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
               {group.headers.map((header) => (
@@ -53,9 +58,9 @@ export function DataTable<TData>({
         </thead>
         <tbody>
           {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className={look.row} {...rowAttributes?.(row)}>
+            <tr key={row.id} className={withShared("border-b border-paper-edge last:border-b-0", look.row)} {...rowAttributes?.(row)}>
               {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className={typeof look.cell === "string" ? look.cell : look.cell(cell.column.id)}>
+                <td key={cell.id} className={typeof look.cell === "function" ? look.cell(cell.column.id) : look.cell}>
                   {flexRender(cell.column.columnDef.cell, cell.getContext())}
                 </td>
               ))}
@@ -63,7 +68,7 @@ export function DataTable<TData>({
           ))}
           {empty ? (
             <tr>
-              <td colSpan={table.getVisibleLeafColumns().length} className={look.empty}>
+              <td colSpan={table.getVisibleLeafColumns().length} className={withShared("text-ink-muted", look.empty)}>
                 {empty}
               </td>
             </tr>
@@ -78,9 +83,9 @@ function SortableHeaderCell<TData>({ header, look, sayOrder }: { header: Header<
   const sorted = header.column.getIsSorted();
   const label = flexRender(header.column.columnDef.header, header.getContext());
   return (
-    <th scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined} className={look.headerCell}>
+    <th scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined} className={withShared("font-medium", look.headerCell)}>
       {header.column.getCanSort() ? (
-        <button type="button" onClick={header.column.getToggleSortingHandler()} className={look.sortButton}>
+        <button type="button" onClick={header.column.getToggleSortingHandler()} className={withShared("inline-flex items-center", look.sortButton)}>
           {label}
           <span aria-hidden="true" className={look.sortGlyph}>
             {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}

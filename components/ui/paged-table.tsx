@@ -7,14 +7,13 @@ import { PageButtons } from "@/components/ui/page-buttons";
 import { useClientTable } from "@/components/ui/use-client-table";
 
 const look: DataTableLook = {
-  frame: "overflow-x-auto",
-  table: "w-full text-left text-sm",
-  head: "border-b border-paper-edge text-ink-soft",
-  headerCell: "py-1.5 pr-3 font-medium",
-  sortButton: "inline-flex items-center gap-1",
-  row: "border-b border-paper-edge last:border-b-0 align-top",
+  table: "text-sm",
+  head: "text-ink-soft",
+  headerCell: "py-1.5 pr-3",
+  sortButton: "gap-1",
+  row: "align-top",
   cell: "py-1.5 pr-3",
-  empty: "py-3 text-ink-muted",
+  empty: "py-3",
 };
 
 /**
