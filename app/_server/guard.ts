@@ -1,11 +1,15 @@
 import "server-only";
 import type { Db } from "@/db/client";
+import { getDb } from "@/db/client";
 import { recordAudit } from "@/db/queries/audit";
 import { getRolesForUser } from "@/db/queries/roles";
+import type { Group, Notebook } from "@/db/schema";
 import type { CurrentUser } from "./auth";
 import { getCurrentUser } from "./auth";
-import { can, type Action, type Actor, type ResourceFor } from "./authz";
+import { can, type Action, type Actor, type GroupAction, type NotebookAction, type ResourceFor } from "./authz";
+import { findNotebook } from "./editions/notebook-lookup";
 import { AppError } from "./errors";
+import { findGroup } from "./group-lookup";
 import { clientIp } from "./request-info";
 
 /** The signed-in user, or 401. */
@@ -58,6 +62,37 @@ export async function authorize<A extends Action>({
     },
   });
   throw new AppError(`forbidden:${resource.type}`, "Your role in this group does not allow that.");
+}
+
+/** What a route has once the guard let it through: the database, who asks, and their roles. */
+type Admitted = { db: Db; user: CurrentUser; actor: Actor };
+
+/**
+ * How a route on one group begins: 401 when signed out, 404 not_found:group when there is no such group,
+ * then `authorize` (403 forbidden:group, audited); the record is known to exist before anyone asks who may touch it.
+ */
+export async function admitToGroup({ groupId, action, request }: { groupId: string; action: GroupAction; request: Request }): Promise<
+  Admitted & { group: Group; resource: ResourceFor<GroupAction> }
+> {
+  const user = await requireUser();
+  const db = await getDb();
+  const group = await findGroup(db, groupId);
+  const actor = await loadActor({ db, user });
+  const resource = { type: "group", groupId: group.id } as const;
+  await authorize({ db, actor, action, resource, request });
+  return { db, user, actor, group, resource };
+}
+
+/** The same for a route on one notebook: 401, then 404 not_found:notebook, then 403 forbidden:notebook. */
+export async function admitToNotebook({ notebookId, action, request }: { notebookId: string; action: NotebookAction; request: Request }): Promise<
+  Admitted & { notebook: Notebook; resource: ResourceFor<NotebookAction> }
+> {
+  const user = await requireUser();
+  const db = await getDb();
+  const { notebook, resource } = await findNotebook(db, notebookId);
+  const actor = await loadActor({ db, user });
+  await authorize({ db, actor, action, resource, request });
+  return { db, user, actor, notebook, resource };
 }
 
 /** Records a change that went through (who changed what), for the group's history. */

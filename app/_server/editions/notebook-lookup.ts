@@ -7,7 +7,7 @@ import { AppError } from "../errors";
 
 /**
  * The notebook, or 404 not_found:notebook; with the resource `authorize` asks about.
- * Shared by the checkpoint, edition, export and attachment routes.
+ * Behind `admitToNotebook` (guard.ts), and used as it is by the public edition, export and attachment reads.
  */
 export async function findNotebook(db: Db, id: string): Promise<{ notebook: Notebook; resource: ResourceFor<"notebook:read"> }> {
   const notebook = await getNotebookById({ db, id });

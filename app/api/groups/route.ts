@@ -8,6 +8,7 @@ import { handleRoute } from "@/app/_server/errors";
 import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
 import { parseJsonBody } from "@/app/_server/parse";
 import { createGroupBody } from "./schema";
+import { groupSummary } from "./summary";
 
 export const dynamic = "force-dynamic";
 
@@ -24,17 +25,5 @@ export const POST = handleRoute(async (request) => {
   await authorize({ db, actor, action: "group:create", resource: { type: "app" }, request });
   const group = await createGroupWithLead({ db, name: body.name, description: body.description, leadUserId: user.id });
   await auditChange({ db, actor, action: "group:create", resourceType: "group", resourceId: group.id, request });
-  return Response.json(
-    {
-      group: {
-        id: group.id,
-        name: group.name,
-        description: group.description,
-        role: "lead",
-        memberCount: 1,
-        createdAt: group.createdAt,
-      },
-    },
-    { status: 201 },
-  );
+  return Response.json({ group: groupSummary(group, { role: "lead", memberCount: 1 }) }, { status: 201 });
 });

@@ -5,10 +5,9 @@
 //   → 201 {"notebook": {"id", "groupId", "groupName", "title", "summary", "role", "createdAt", "updatedAt"}}
 //   → 400 bad_request:*, 401 unauthorized:session, 403 forbidden:group, 404 not_found:group
 import { getDb } from "@/db/client";
-import { getGroupById } from "@/db/queries/groups";
 import { createNotebook, listNotebooksForUser } from "@/db/queries/notebooks";
-import { AppError, handleRoute } from "@/app/_server/errors";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { handleRoute } from "@/app/_server/errors";
+import { admitToGroup, auditChange, requireUser } from "@/app/_server/guard";
 import { parseJsonBody, parseSearchParams } from "@/app/_server/parse";
 import { createNotebookBody, listNotebooksQuery } from "./schema";
 
@@ -23,12 +22,7 @@ export const GET = handleRoute(async (request) => {
 
 export const POST = handleRoute(async (request) => {
   const body = await parseJsonBody(request, createNotebookBody);
-  const user = await requireUser();
-  const db = await getDb();
-  const group = await getGroupById({ db, id: body.groupId });
-  if (!group) throw new AppError("not_found:group", "No group with that id.");
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "notebook:create", resource: { type: "group", groupId: group.id }, request });
+  const { db, user, actor, group } = await admitToGroup({ groupId: body.groupId, action: "notebook:create", request });
   const notebook = await createNotebook({ db, groupId: group.id, title: body.title, summary: body.summary, createdBy: user.id });
   await auditChange({ db, actor, action: "notebook:create", resourceType: "notebook", resourceId: notebook.id, request });
   return Response.json(

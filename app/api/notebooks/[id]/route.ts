@@ -6,25 +6,18 @@
 // DELETE /api/notebooks/:id (lead) → 200 {"ok": true}; 409 conflict:notebook when it has published editions
 //   → 400 bad_request:*, 401 unauthorized:session, 403 forbidden:notebook, 404 not_found:notebook
 import type { Db } from "@/db/client";
-import { getDb } from "@/db/client";
 import { getGroupById } from "@/db/queries/groups";
-import { deleteNotebook, getNotebookById, updateNotebook } from "@/db/queries/notebooks";
+import { deleteNotebook, updateNotebook } from "@/db/queries/notebooks";
 import type { Notebook } from "@/db/schema";
 import { can, type Actor } from "@/app/_server/authz";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToNotebook, auditChange } from "@/app/_server/guard";
 import { parseJsonBody, parseParams } from "@/app/_server/parse";
 import { notebookParams, updateNotebookBody } from "./schema";
 
 export const dynamic = "force-dynamic";
 
 type Params = { id: string };
-
-async function findNotebook(db: Db, id: string): Promise<Notebook> {
-  const notebook = await getNotebookById({ db, id });
-  if (!notebook) throw new AppError("not_found:notebook", "No notebook with that id.");
-  return notebook;
-}
 
 async function describe(db: Db, notebook: Notebook, actor: Actor) {
   const group = await getGroupById({ db, id: notebook.groupId });
@@ -43,12 +36,7 @@ async function describe(db: Db, notebook: Notebook, actor: Actor) {
 
 export const GET = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, notebookParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const notebook = await findNotebook(db, id);
-  const actor = await loadActor({ db, user });
-  const resource = { type: "notebook", groupId: notebook.groupId, notebookId: notebook.id } as const;
-  await authorize({ db, actor, action: "notebook:read", resource, request });
+  const { db, actor, notebook, resource } = await admitToNotebook({ notebookId: id, action: "notebook:read", request });
   return Response.json({
     notebook: { ...(await describe(db, notebook, actor)), content: notebook.content },
     permissions: {
@@ -64,11 +52,7 @@ export const GET = handleRoute<Params>(async (request, { params }) => {
 export const PATCH = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, notebookParams);
   const body = await parseJsonBody(request, updateNotebookBody);
-  const user = await requireUser();
-  const db = await getDb();
-  const notebook = await findNotebook(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "notebook:edit", resource: { type: "notebook", groupId: notebook.groupId, notebookId: id }, request });
+  const { db, actor } = await admitToNotebook({ notebookId: id, action: "notebook:edit", request });
   const updated = await updateNotebook({ db, id, changes: body });
   if (!updated) throw new AppError("not_found:notebook", "No notebook with that id.");
   await auditChange({ db, actor, action: "notebook:edit", resourceType: "notebook", resourceId: id, detail: { fields: Object.keys(body) }, request });
@@ -77,11 +61,7 @@ export const PATCH = handleRoute<Params>(async (request, { params }) => {
 
 export const DELETE = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, notebookParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const notebook = await findNotebook(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "notebook:delete", resource: { type: "notebook", groupId: notebook.groupId, notebookId: id }, request });
+  const { db, actor, notebook } = await admitToNotebook({ notebookId: id, action: "notebook:delete", request });
   const outcome = await deleteNotebook({ db, id });
   if (outcome === "has_editions") {
     throw new AppError("conflict:notebook", "This notebook has published editions; their permanent links keep it.");

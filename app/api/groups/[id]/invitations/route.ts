@@ -5,13 +5,11 @@
 //   → 201 {"invitation": {…as above}}
 //   → 409 conflict:membership when the address already belongs to a member
 //   → 400 bad_request:*, 401 unauthorized:session, 403 forbidden:group, 404 not_found:group
-import { getDb } from "@/db/client";
 import { createInvitation, listPendingInvitations } from "@/db/queries/invitations";
 import { getMembership } from "@/db/queries/groups";
 import { getUserByEmail, normalizeEmail } from "@/db/queries/users";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { findGroup } from "@/app/_server/group-lookup";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToGroup, auditChange } from "@/app/_server/guard";
 import { sendInvitationMail } from "@/app/_server/mail";
 import { parseJsonBody, parseParams } from "@/app/_server/parse";
 import { newToken } from "@/app/_server/tokens";
@@ -26,22 +24,14 @@ const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
 export const GET = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, groupParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const group = await findGroup(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "group:manage-members", resource: { type: "group", groupId: group.id }, request });
+  const { db, group } = await admitToGroup({ groupId: id, action: "group:manage-members", request });
   return Response.json({ invitations: await listPendingInvitations({ db, groupId: group.id }) });
 });
 
 export const POST = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, groupParams);
   const body = await parseJsonBody(request, inviteBody);
-  const user = await requireUser();
-  const db = await getDb();
-  const group = await findGroup(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "group:manage-members", resource: { type: "group", groupId: group.id }, request });
+  const { db, user, actor, group } = await admitToGroup({ groupId: id, action: "group:manage-members", request });
 
   const email = normalizeEmail(body.email);
   const account = await getUserByEmail({ db, email });

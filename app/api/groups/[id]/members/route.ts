@@ -5,13 +5,11 @@
 //   → 404 not_found:user when no account uses the address (e-mail invitations come with the review work)
 //   → 409 conflict:membership when they already belong to the group
 //   → 400 bad_request:*, 401 unauthorized:session, 403 forbidden:group, 404 not_found:group
-import { getDb } from "@/db/client";
 import { addMember, listMembers } from "@/db/queries/members";
 import { getUserByEmail } from "@/db/queries/users";
 import { announceMembershipChange } from "@/app/_server/collab/membership-events";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { findGroup } from "@/app/_server/group-lookup";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToGroup, auditChange } from "@/app/_server/guard";
 import { parseJsonBody, parseParams } from "@/app/_server/parse";
 import { groupParams } from "../schema";
 import { addMemberBody } from "./schema";
@@ -22,22 +20,14 @@ type Params = { id: string };
 
 export const GET = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, groupParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const group = await findGroup(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "group:read", resource: { type: "group", groupId: group.id }, request });
+  const { db, group } = await admitToGroup({ groupId: id, action: "group:read", request });
   return Response.json({ members: await listMembers({ db, groupId: group.id }) });
 });
 
 export const POST = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, groupParams);
   const body = await parseJsonBody(request, addMemberBody);
-  const user = await requireUser();
-  const db = await getDb();
-  const group = await findGroup(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "group:manage-members", resource: { type: "group", groupId: group.id }, request });
+  const { db, actor, group } = await admitToGroup({ groupId: id, action: "group:manage-members", request });
   const account = await getUserByEmail({ db, email: body.email });
   if (!account) {
     throw new AppError("not_found:user", "No Vierbein account uses that address yet. Ask them to sign up, then add them.");

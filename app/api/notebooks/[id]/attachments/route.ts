@@ -5,12 +5,10 @@
 //   → 413 payload_too_large:attachment over 10 MB; 415 unsupported_media_type:attachment when the bytes are
 //     not PNG, JPEG, PDF or CSV (the name is never trusted); nothing is stored on any refusal
 //   → 400 bad_request:*, 401 unauthorized:session, 403 forbidden:notebook, 404 not_found:notebook
-import { getDb } from "@/db/client";
 import { listAttachments } from "@/db/queries/attachments";
 import type { Attachment } from "@/db/schema";
-import { findNotebook } from "@/app/_server/editions/notebook-lookup";
 import { handleRoute } from "@/app/_server/errors";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToNotebook, auditChange } from "@/app/_server/guard";
 import { parseParams } from "@/app/_server/parse";
 import { FIGURE_TYPES, type AttachmentType } from "@/app/_server/storage/sniff";
 import { readUploadedFile, storeAttachment } from "@/app/_server/storage/upload";
@@ -37,21 +35,14 @@ function describe(attachment: Attachment & { uploadedByName?: string | null }) {
 
 export const GET = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, attachmentsParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const { notebook, resource } = await findNotebook(db, id);
-  await authorize({ db, actor: await loadActor({ db, user }), action: "notebook:read", resource, request });
+  const { db, notebook } = await admitToNotebook({ notebookId: id, action: "notebook:read", request });
   return Response.json({ attachments: (await listAttachments({ db, notebookId: notebook.id })).map(describe) });
 });
 
 export const POST = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, attachmentsParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const { notebook, resource } = await findNotebook(db, id);
-  const actor = await loadActor({ db, user });
   // Who may attach is decided before a byte of the upload is read.
-  await authorize({ db, actor, action: "notebook:attach", resource, request });
+  const { db, user, actor, notebook } = await admitToNotebook({ notebookId: id, action: "notebook:attach", request });
   const file = await readUploadedFile(request);
   const stored = await storeAttachment({ db, notebookId: notebook.id, uploadedBy: user.id, name: file.name, bytes: file.bytes });
   await auditChange({ db, actor, action: "notebook:attach", resourceType: "notebook", resourceId: notebook.id, detail: { attachmentId: stored.id, contentType: stored.contentType, size: stored.size }, request });

@@ -3,12 +3,10 @@
 //     newest first; "createdByName" is null for automatic checkpoints
 // POST /api/notebooks/:id/checkpoints {"label"} (author or lead) → 201 {"checkpoint": {…same}}
 //   → 400 bad_request:*, 401 unauthorized:session, 403 forbidden:notebook, 404 not_found:notebook
-import { getDb } from "@/db/client";
 import { listCheckpoints } from "@/db/queries/checkpoints";
 import { checkpointNotebook } from "@/app/_server/checkpoints/save";
-import { findNotebook } from "@/app/_server/editions/notebook-lookup";
 import { handleRoute } from "@/app/_server/errors";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToNotebook, auditChange } from "@/app/_server/guard";
 import { parseJsonBody, parseParams } from "@/app/_server/parse";
 import { checkpointsParams, saveCheckpointBody } from "./schema";
 
@@ -18,21 +16,14 @@ type Params = { id: string };
 
 export const GET = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, checkpointsParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const { notebook, resource } = await findNotebook(db, id);
-  await authorize({ db, actor: await loadActor({ db, user }), action: "notebook:read", resource, request });
+  const { db, notebook } = await admitToNotebook({ notebookId: id, action: "notebook:read", request });
   return Response.json({ checkpoints: await listCheckpoints({ db, notebookId: notebook.id }) });
 });
 
 export const POST = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, checkpointsParams);
   const body = await parseJsonBody(request, saveCheckpointBody);
-  const user = await requireUser();
-  const db = await getDb();
-  const { notebook, resource } = await findNotebook(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "notebook:checkpoint", resource, request });
+  const { db, user, actor, notebook } = await admitToNotebook({ notebookId: id, action: "notebook:checkpoint", request });
   const saved = await checkpointNotebook({ db, notebookId: notebook.id, kind: "manual", label: body.label, createdBy: user.id });
   await auditChange({ db, actor, action: "notebook:checkpoint", resourceType: "notebook", resourceId: notebook.id, detail: { checkpointId: saved.id }, request });
   return Response.json(

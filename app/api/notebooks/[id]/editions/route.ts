@@ -13,7 +13,7 @@ import { citationKey, editionPath, siteOrigin } from "@/app/_server/editions/cit
 import { findNotebook } from "@/app/_server/editions/notebook-lookup";
 import { publishEdition } from "@/app/_server/editions/publish";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToNotebook, auditChange, authorize, loadActor } from "@/app/_server/guard";
 import { sendEditionPublishedMail } from "@/app/_server/mail";
 import { getCurrentUser } from "@/app/_server/auth";
 import { parseJsonBody, parseParams } from "@/app/_server/parse";
@@ -45,11 +45,7 @@ export const GET = handleRoute<Params>(async (request, { params }) => {
 export const POST = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, editionsParams);
   const body = await parseJsonBody(request, publishEditionBody);
-  const user = await requireUser();
-  const db = await getDb();
-  const { notebook, resource } = await findNotebook(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "notebook:publish", resource, request });
+  const { db, user, actor, notebook } = await admitToNotebook({ notebookId: id, action: "notebook:publish", request });
   const outcome = await publishEdition({ db, notebook, publishedBy: user.id, reason: body.reason || null });
   if ("refused" in outcome) {
     const numbers = outcome.refuted.map((entry) => entry.number).join(", ");

@@ -6,15 +6,11 @@
 //   authors and leads (not the writer)
 //   → 400 bad_request:* (also bad_request:anchor for a step id the notebook does not have), 401, 403 forbidden:notebook,
 //     404 not_found:notebook
-import type { Db } from "@/db/client";
-import { getDb } from "@/db/client";
-import { getNotebookById } from "@/db/queries/notebooks";
 import { createRemark, getRemarkThread, listRemarkThreads } from "@/db/queries/remarks";
-import type { Notebook } from "@/db/schema";
 import { can } from "@/app/_server/authz";
 import { readNotebookDocument } from "@/app/_server/collab/documents";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToNotebook, auditChange } from "@/app/_server/guard";
 import { describeAnchor, notifyRemark, stepNumberOf } from "@/app/_server/mail/remark-mail";
 import { parseJsonBody, parseParams, parseSearchParams } from "@/app/_server/parse";
 import { createRemarkBody, notebookRemarksParams, remarksQuery } from "./schema";
@@ -23,21 +19,10 @@ export const dynamic = "force-dynamic";
 
 type Params = { id: string };
 
-async function findNotebook(db: Db, id: string): Promise<Notebook> {
-  const notebook = await getNotebookById({ db, id });
-  if (!notebook) throw new AppError("not_found:notebook", "No notebook with that id.");
-  return notebook;
-}
-
 export const GET = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, notebookRemarksParams);
   const query = parseSearchParams(request, remarksQuery);
-  const user = await requireUser();
-  const db = await getDb();
-  const notebook = await findNotebook(db, id);
-  const actor = await loadActor({ db, user });
-  const resource = { type: "notebook", groupId: notebook.groupId, notebookId: notebook.id } as const;
-  await authorize({ db, actor, action: "notebook:read", resource, request });
+  const { db, actor, notebook, resource } = await admitToNotebook({ notebookId: id, action: "notebook:read", request });
   const threads = await listRemarkThreads({ db, notebookId: notebook.id, status: query.status, authorId: query.author });
   return Response.json({
     threads,
@@ -48,11 +33,7 @@ export const GET = handleRoute<Params>(async (request, { params }) => {
 export const POST = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, notebookRemarksParams);
   const body = await parseJsonBody(request, createRemarkBody);
-  const user = await requireUser();
-  const db = await getDb();
-  const notebook = await findNotebook(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "notebook:remark", resource: { type: "notebook", groupId: notebook.groupId, notebookId: notebook.id }, request });
+  const { db, user, actor, notebook } = await admitToNotebook({ notebookId: id, action: "notebook:remark", request });
 
   const document = await readNotebookDocument({ db, notebookId: notebook.id });
   const stepNumber = body.anchor.stepId && document ? stepNumberOf(document.json, body.anchor.stepId) : null;

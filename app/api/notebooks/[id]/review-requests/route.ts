@@ -4,11 +4,9 @@
 //   → 201 {"request": {"notebookId", "reviewer": {"userId", "name", "email"}, "requestedAt"}}
 //   → 400 bad_request:reviewer when that person is not a reviewer of the notebook's group
 //   → 400 bad_request:*, 401 unauthorized:session, 403 forbidden:notebook, 404 not_found:notebook
-import { getDb } from "@/db/client";
-import { getNotebookById } from "@/db/queries/notebooks";
 import { listGroupReviewers } from "@/db/queries/review-requests";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToNotebook, auditChange } from "@/app/_server/guard";
 import { sendReviewRequestMail } from "@/app/_server/mail";
 import { parseJsonBody, parseParams } from "@/app/_server/parse";
 import { reviewRequestBody, reviewRequestParams } from "./schema";
@@ -19,13 +17,7 @@ type Params = { id: string };
 
 async function loadForRequest(request: Request, params: Promise<Params>) {
   const { id } = await parseParams(params, reviewRequestParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const notebook = await getNotebookById({ db, id });
-  if (!notebook) throw new AppError("not_found:notebook", "No notebook with that id.");
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "notebook:request-review", resource: { type: "notebook", groupId: notebook.groupId, notebookId: notebook.id }, request });
-  return { db, user, actor, notebook };
+  return admitToNotebook({ notebookId: id, action: "notebook:request-review", request });
 }
 
 export const GET = handleRoute<Params>(async (request, { params }) => {

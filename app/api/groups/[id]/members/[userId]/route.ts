@@ -2,12 +2,10 @@
 // DELETE /api/groups/:id/members/:userId (lead only) → 200 {"ok": true}
 //   → 409 conflict:last-lead when the change would leave the group without a lead
 //   → 404 not_found:group | not_found:member, 400 bad_request:*, 401 unauthorized:session, 403 forbidden:group
-import { getDb } from "@/db/client";
 import { changeMember, listMembers, type MemberChange } from "@/db/queries/members";
 import { announceMembershipChange } from "@/app/_server/collab/membership-events";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { findGroup } from "@/app/_server/group-lookup";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToGroup, auditChange } from "@/app/_server/guard";
 import { parseJsonBody, parseParams } from "@/app/_server/parse";
 import { changeRoleBody, memberParams } from "./schema";
 
@@ -24,11 +22,7 @@ function failIfRefused(change: MemberChange): void {
 export const PATCH = handleRoute<Params>(async (request, { params }) => {
   const { id, userId } = await parseParams(params, memberParams);
   const { role } = await parseJsonBody(request, changeRoleBody);
-  const user = await requireUser();
-  const db = await getDb();
-  const group = await findGroup(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "group:manage-members", resource: { type: "group", groupId: group.id }, request });
+  const { db, actor, group } = await admitToGroup({ groupId: id, action: "group:manage-members", request });
   const change = await changeMember({ db, groupId: group.id, userId, role });
   failIfRefused(change);
   // Open co-editing sockets re-check this person's role at once.
@@ -40,11 +34,7 @@ export const PATCH = handleRoute<Params>(async (request, { params }) => {
 
 export const DELETE = handleRoute<Params>(async (request, { params }) => {
   const { id, userId } = await parseParams(params, memberParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const group = await findGroup(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "group:manage-members", resource: { type: "group", groupId: group.id }, request });
+  const { db, actor, group } = await admitToGroup({ groupId: id, action: "group:manage-members", request });
   failIfRefused(await changeMember({ db, groupId: group.id, userId, role: null }));
   announceMembershipChange({ groupId: group.id, userId });
   await auditChange({ db, actor, action: "group:remove-member", resourceType: "group", resourceId: group.id, detail: { userId }, request });

@@ -3,12 +3,10 @@
 //     the current document is first saved as a before-restore checkpoint, then the checkpoint's
 //     document is written as an ordinary edit (open editors see it; the update log keeps everything)
 //   → 401 unauthorized:session, 403 forbidden:notebook, 404 not_found:notebook | not_found:checkpoint
-import { getDb } from "@/db/client";
 import { getCheckpoint } from "@/db/queries/checkpoints";
 import { restoreCheckpoint } from "@/app/_server/checkpoints/save";
-import { findNotebook } from "@/app/_server/editions/notebook-lookup";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToNotebook, auditChange, authorize } from "@/app/_server/guard";
 import { parseParams } from "@/app/_server/parse";
 import { checkpointParams } from "../../schema";
 
@@ -18,11 +16,7 @@ type Params = { id: string; cid: string };
 
 export const POST = handleRoute<Params>(async (request, { params }) => {
   const { id, cid } = await parseParams(params, checkpointParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const { notebook, resource } = await findNotebook(db, id);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "notebook:read", resource, request });
+  const { db, user, actor, notebook, resource } = await admitToNotebook({ notebookId: id, action: "notebook:read", request });
   const checkpoint = await getCheckpoint({ db, notebookId: notebook.id, id: cid });
   if (!checkpoint) throw new AppError("not_found:checkpoint", "No checkpoint with that id in this notebook.");
   await authorize({ db, actor, action: "notebook:restore", resource, request });

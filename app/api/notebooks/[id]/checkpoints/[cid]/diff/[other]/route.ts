@@ -6,12 +6,10 @@
 //     steps are matched by their stable id; the differing steps are re-checked in each version
 //   → 401 unauthorized:session, 403 forbidden:notebook, 404 not_found:notebook | not_found:checkpoint
 import type { JSONContent } from "@tiptap/core";
-import { getDb } from "@/db/client";
 import { getCheckpoint } from "@/db/queries/checkpoints";
 import { diffDocuments } from "@/app/_server/checkpoints/diff";
-import { findNotebook } from "@/app/_server/editions/notebook-lookup";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToNotebook } from "@/app/_server/guard";
 import { parseParams } from "@/app/_server/parse";
 import { diffParams } from "../../../schema";
 
@@ -23,10 +21,7 @@ const EMPTY: JSONContent = { type: "doc", content: [] };
 
 export const GET = handleRoute<Params>(async (request, { params }) => {
   const { id, cid, other } = await parseParams(params, diffParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const { notebook, resource } = await findNotebook(db, id);
-  await authorize({ db, actor: await loadActor({ db, user }), action: "notebook:read", resource, request });
+  const { db, notebook } = await admitToNotebook({ notebookId: id, action: "notebook:read", request });
   const [from, to] = await Promise.all([getCheckpoint({ db, notebookId: notebook.id, id: cid }), getCheckpoint({ db, notebookId: notebook.id, id: other })]);
   if (!from || !to) throw new AppError("not_found:checkpoint", "No checkpoint with that id in this notebook.");
   const diff = await diffDocuments({ before: (from.content ?? EMPTY) as JSONContent, after: (to.content ?? EMPTY) as JSONContent });
