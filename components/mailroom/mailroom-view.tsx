@@ -26,7 +26,7 @@ export function MailroomView() {
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div className="flex flex-col gap-1">
           <label htmlFor={filterId} className="text-sm font-medium">
-            Recipient's address
+            Recipient’s address
           </label>
           <input
             id={filterId}

@@ -31,7 +31,7 @@ export function ReviewRequestForm({ notebookId }: { notebookId: string }) {
   });
 
   if (reviewers.isSuccess && reviewers.data.length === 0) {
-    return <p className="text-xs text-ink-muted">The group has no reviewers yet; a group lead can invite one from the group's page.</p>;
+    return <p className="text-xs text-ink-muted">The group has no reviewers yet; a group lead can invite one from the group’s page.</p>;
   }
 
   const onSubmit = handleSubmit(async (values) => {
