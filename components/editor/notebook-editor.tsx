@@ -6,7 +6,6 @@ import "./notebook-editor.css";
 import { EditorContent, ReactNodeViewRenderer, useEditor, useEditorState } from "@tiptap/react";
 import { useEffect, useMemo, useState } from "react";
 import { notebookExtensions } from "@/editor/notebook-extensions";
-import { outlineOf } from "@/editor/outline";
 import { Figure } from "@/editor/figure";
 import { SpacetimeBlock } from "@/editor/spacetime-block";
 import { Step } from "@/editor/step";
@@ -20,8 +19,10 @@ import { FigureView } from "./figure-view";
 import { SpacetimeBlockView } from "./spacetime-block-view";
 import { createNotebookChecker, type NotebookChecker } from "./step-checker-client";
 import { StepView } from "./step-view";
+import { updateStepView } from "./step-view-update";
 import { useCollaboration, type Collaboration } from "./use-collaboration";
 import { colorForUser } from "@/editor/collaboration";
+import { useOutline } from "./use-outline";
 import { useStepChecks } from "./use-step-checks";
 import { VerdictSummary } from "./verdict-summary";
 import { RemarksPanel, RemarksProvider } from "@/components/remarks/remarks-panel";
@@ -33,12 +34,9 @@ function withViews(session: Collaboration, me: { name: string; color: string }) 
     step: Step.extend({
       addNodeView: () =>
         ReactNodeViewRenderer(StepView, {
-          // The default re-renders only when the node changes; numbers and verdicts arrive as decorations.
-          update: ({ oldNode, newNode, updateProps }) => {
-            if (newNode.type !== oldNode.type) return false;
-            updateProps();
-            return true;
-          },
+          // The default re-renders only when the node changes; numbers and verdicts arrive as
+          // decorations, so every update goes through ours (see updateStepView).
+          update: updateStepView,
         }),
     }),
     spacetimeBlock: SpacetimeBlock.extend({ addNodeView: () => ReactNodeViewRenderer(SpacetimeBlockView) }),
@@ -114,15 +112,16 @@ function SharedNotebookEditor({
       for (const verdict of verdicts?.values() ?? []) {
         if (verdict.state === "answered" && verdict.answer.verdict === "verified" && verdict.answer.method.kind === "numeric") probabilistic += 1;
       }
-      return { outline: outlineOf(current.state), tally: tallyVerdicts(current.state), probabilistic };
+      return { tally: tallyVerdicts(current.state), probabilistic };
     },
   });
+  const outline = useOutline(editor);
 
   if (!editor || !view || !session.loaded) {
     return <p role="status" className="py-12 text-sm text-ink-muted">Opening the notebook…</p>;
   }
 
-  const firstRefuted = view.outline.find((entry) => entry.kind === "step" && entry.verdict === "refuted");
+  const firstRefuted = outline.find((entry) => entry.kind === "step" && entry.verdict === "refuted");
 
   return (
     // Remarks: the side list beside the text on very wide screens, below it otherwise.
@@ -132,12 +131,12 @@ function SharedNotebookEditor({
           <details className="lg:hidden">
             <summary className="cursor-pointer font-sans text-sm font-medium text-ink-soft">Outline</summary>
             <div className="mt-2">
-              <NotebookOutline editor={editor} entries={view.outline} />
+              <NotebookOutline editor={editor} entries={outline} />
             </div>
           </details>
           <div className="hidden lg:block">
             <p className="mb-1 font-sans text-xs font-semibold uppercase tracking-wide text-ink-muted">Outline</p>
-            <NotebookOutline editor={editor} entries={view.outline} />
+            <NotebookOutline editor={editor} entries={outline} />
           </div>
         </nav>
 

@@ -19,6 +19,16 @@ function relationHtml(latex: string): string {
   return html;
 }
 
+/**
+ * React keys by identity, not position: typing shifts the positions of every later block, and
+ * position keys made React rebuild all their items (KaTeX and all) on each keystroke. Steps
+ * have ids; sections and blocks are keyed by their order among their kind.
+ */
+function outlineKeys(entries: readonly OutlineEntry[]): string[] {
+  const seen = { section: 0, spacetime: 0 };
+  return entries.map((entry) => (entry.kind === "step" ? entry.id : `${entry.kind}-${seen[entry.kind]++}`));
+}
+
 /** Moves the caret to a block and scrolls it into the middle of the view. */
 export function jumpTo(editor: Editor, pos: number): void {
   editor.chain().setTextSelection(pos + 1).focus(undefined, { scrollIntoView: false }).run();
@@ -29,10 +39,11 @@ export function jumpTo(editor: Editor, pos: number): void {
 /** Sections, spacetime blocks and steps of the notebook, each a link that jumps there. */
 export function NotebookOutline({ editor, entries }: { editor: Editor; entries: readonly OutlineEntry[] }) {
   if (!entries.length) return <p className="font-sans text-sm text-ink-muted">Headings and steps will be listed here.</p>;
+  const keys = outlineKeys(entries);
   return (
     <ol className="space-y-0.5 font-sans text-sm">
-      {entries.map((entry) => (
-        <li key={`${entry.kind}-${entry.pos}`}>
+      {entries.map((entry, index) => (
+        <li key={keys[index]}>
           <button
             type="button"
             onClick={() => jumpTo(editor, entry.pos)}

@@ -42,6 +42,7 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
     let loaded = false;
     let refused: string | null = null;
     let lastInput = Date.now();
+    let lastSignature = "";
 
     const publish = () => {
       const unstored = tracker.unstoredCount();
@@ -55,7 +56,21 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
       const coAuthors = [...provider.awareness.getStates().entries()]
         .filter(([clientId, state]) => clientId !== doc.clientID && state.user)
         .map(([clientId, state]) => ({ clientId, ...(state.user as CoAuthor) }));
+      // Awareness changes with every caret move; re-render only when what we show changed.
+      const signature = JSON.stringify([loaded, link, coAuthors]);
+      if (signature === lastSignature) return;
+      lastSignature = signature;
       setSession({ doc, provider, loaded, link, coAuthors });
+    };
+    // Document updates and the server's acknowledgements only move the unstored count: publish
+    // them at most every 200 ms. Re-rendering the editor per keystroke made React walk the whole
+    // editable DOM each time (it saves and restores the selection around every commit).
+    let updateTimer: ReturnType<typeof setTimeout> | null = null;
+    const publishSoon = () => {
+      updateTimer ??= setTimeout(() => {
+        updateTimer = null;
+        publish();
+      }, 200);
     };
 
     const setStatus = (status: CoAuthor["status"]) => {
@@ -66,7 +81,7 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
 
     const onServerMessage = (event: MessageEvent) => {
       if (event.data instanceof ArrayBuffer) tracker.noteServerMessage(new Uint8Array(event.data));
-      publish();
+      publishSoon();
     };
     const onStatus = () => {
       provider.ws?.removeEventListener("message", onServerMessage);
@@ -93,7 +108,7 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
     provider.on("sync", onSync);
     provider.on("connection-close", onClose);
     provider.awareness.on("change", publish);
-    doc.on("update", publish);
+    doc.on("update", publishSoon);
 
     const onInput = () => {
       lastInput = Date.now();
@@ -108,6 +123,7 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
 
     return () => {
       window.clearInterval(idleTimer);
+      if (updateTimer !== null) clearTimeout(updateTimer);
       window.removeEventListener("keydown", onInput);
       window.removeEventListener("pointerdown", onInput);
       document.removeEventListener("visibilitychange", onVisibility);

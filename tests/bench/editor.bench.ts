@@ -6,7 +6,7 @@
 // Builds into BENCH_NEXT_DIST_DIR (default .next-bench) unless that folder already holds a
 // build and BENCH_SKIP_BUILD=1; starts its own server on a free port with a temp DATA_DIR.
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
-import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import path from "node:path";
@@ -121,7 +121,17 @@ async function typingLatency(page: Page, keystrokes: string): Promise<{ latencie
     w.__pendingSeen = null;
     w.__settled = null;
   });
+  // BENCH_CPU_PROFILE=file.cpuprofile records the page's main thread while typing (open it in Chromium's DevTools).
+  const profiling = process.env.BENCH_CPU_PROFILE ? await page.context().newCDPSession(page) : null;
+  if (profiling) {
+    await profiling.send("Profiler.enable");
+    await profiling.send("Profiler.start");
+  }
   await page.keyboard.type(keystrokes, { delay: 60 });
+  if (profiling) {
+    const { profile } = await profiling.send("Profiler.stop");
+    writeFileSync(process.env.BENCH_CPU_PROFILE!, JSON.stringify(profile));
+  }
   // the checker waits 400 ms of quiet before it starts; give it 5 s in all
   await page.waitForTimeout(5000);
   return page.evaluate(() => {
