@@ -46,22 +46,8 @@ function compileNode<N>(A: Arithmetic<N>, e: Expr, names: SlotNames): Compiled<N
     case "sym": return bound(e.name, names);
     case "dot": return bound(dotVariable(e.name, e.order), names);
     case "differential": return bound(differentialVariable(e.name), names);
-    case "add": {
-      const terms = e.terms.map(rec);
-      return (p) => {
-        let s = terms[0](p);
-        for (let i = 1; i < terms.length; i += 1) s = A.add(s, terms[i](p));
-        return s;
-      };
-    }
-    case "mul": {
-      const factors = e.factors.map(rec);
-      return (p) => {
-        let s = factors[0](p);
-        for (let i = 1; i < factors.length; i += 1) s = A.mul(s, factors[i](p));
-        return s;
-      };
-    }
+    case "add": return fold(e.terms.map(rec), A.add);
+    case "mul": return fold(e.factors.map(rec), A.mul);
     case "div": {
       const top = rec(e.num);
       const bottom = rec(e.den);
@@ -101,6 +87,15 @@ function compileNode<N>(A: Arithmetic<N>, e: Expr, names: SlotNames): Compiled<N
 }
 
 /** A value fixed at compile time; a failure to make it (out of range) is raised when run, like any other. */
+/** A sum or product of compiled parts, folded left to right in one loop per evaluation. */
+function fold<N>(parts: Compiled<N>[], op: (a: N, b: N) => N): Compiled<N> {
+  return (p) => {
+    let s = parts[0](p);
+    for (let i = 1; i < parts.length; i += 1) s = op(s, parts[i](p));
+    return s;
+  };
+}
+
 function constant<N>(make: () => N): Compiled<N> {
   try {
     const v = make();
