@@ -26,14 +26,17 @@ function decodeEntities(text: string): string {
  * @example
  * renderLatex("\\frac{r_s}{r}", false).error // null
  * renderLatex("\\frac{r_s}{", false).error   // "KaTeX parse error: …"
+ * renderLatex("r_s", false, { visualOnly: true }).html // no <math> element: mark it aria-hidden
  */
-export function renderLatex(latex: string, displayMode: boolean): RenderedLatex {
+export function renderLatex(latex: string, displayMode: boolean, { visualOnly = false }: { visualOnly?: boolean } = {}): RenderedLatex {
   const html = katex.renderToString(latex, {
     displayMode,
     trust: false,
     throwOnError: false,
     strict: "ignore",
-    output: "htmlAndMathml",
+    // visualOnly: for a copy whose source is read out beside it (the step's source line, an
+    // outline entry's label); the MathML tree would double the DOM of a long notebook.
+    output: visualOnly ? "html" : "htmlAndMathml",
   });
   const match = ERROR_TITLE.exec(html);
   return { html, error: match ? decodeEntities(match[1]) : null };

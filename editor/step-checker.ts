@@ -1,6 +1,7 @@
 import type { CheckAnswer, CheckError, CheckRequest } from "@/cas/check/protocol";
 import type { StepCheckPlan } from "./check-request";
 import type { StepVerdict } from "./step-verdicts";
+import { QuietTimer } from "./quiet-timer";
 
 /**
  * Anything that can check a step: the CAS browser worker, or the HTTP route as a fallback.
@@ -51,21 +52,24 @@ export class CheckScheduler {
   private readonly cache = new Map<string, CheckAnswer | CheckError>();
   private queue: Array<{ id: string; request: CheckRequest; key: string; retried?: boolean }> = [];
   private running = 0;
-  private timer: ReturnType<typeof setTimeout> | null = null;
+  private readonly quiet: QuietTimer;
+  private planned: { plan: () => ReadonlyMap<string, StepCheckPlan>; shown?: () => ReadonlyMap<string, StepVerdict> } | null = null;
   private disposed = false;
 
   constructor(options: CheckSchedulerOptions) {
     this.options = { debounceMs: 400, concurrency: 2, cacheSize: 1000, ...options };
+    this.quiet = new QuietTimer(this.options.debounceMs, () => {
+      const planned = this.planned;
+      this.planned = null;
+      if (planned) this.apply(planned.plan(), planned.shown?.());
+    });
   }
 
   /** Re-plans after the quiet period; each call restarts the wait. */
   schedule(plan: () => ReadonlyMap<string, StepCheckPlan>, shown?: () => ReadonlyMap<string, StepVerdict>): void {
     if (this.disposed) return;
-    if (this.timer !== null) clearTimeout(this.timer);
-    this.timer = setTimeout(() => {
-      this.timer = null;
-      this.apply(plan(), shown?.());
-    }, this.options.debounceMs);
+    this.planned = { plan, shown };
+    this.quiet.poke();
   }
 
   /**
@@ -116,7 +120,7 @@ export class CheckScheduler {
   /** Stops all work; later answers are ignored. */
   dispose(): void {
     this.disposed = true;
-    if (this.timer !== null) clearTimeout(this.timer);
+    this.quiet.cancel();
     for (const slot of this.slots.values()) slot.controller?.abort();
     this.slots.clear();
     this.queue = [];

@@ -2,6 +2,7 @@ import { Extension } from "@tiptap/core";
 import type { Node as PMNode } from "@tiptap/pm/model";
 import { Plugin, PluginKey } from "@tiptap/pm/state";
 import { Decoration, DecorationSet } from "@tiptap/pm/view";
+import { editedStepIds } from "./step-text-edit";
 
 export interface StepNumberingState {
   /** Step id → its current number (1-based, document order). */
@@ -77,6 +78,8 @@ export const StepNumbering = Extension.create({
           },
           apply: (tr, old) => {
             if (!tr.docChanged) return old;
+            // Text typed in a step changes no number: move the marks along instead of rebuilding them.
+            if (editedStepIds(tr) !== null) return { numbers: old.numbers, decorations: old.decorations.map(tr.mapping, tr.doc) };
             const numbers = numberSteps(tr.doc);
             return { numbers, decorations: buildDecorations(tr.doc, numbers) };
           },

@@ -3,6 +3,7 @@ import type { Node as PMNode } from "@tiptap/pm/model";
 import { Plugin, PluginKey, type EditorState, type Transaction } from "@tiptap/pm/state";
 import { Decoration, DecorationSet } from "@tiptap/pm/view";
 import type { CheckAnswer, CheckError } from "@/cas/check/protocol";
+import { editedStepIds } from "./step-text-edit";
 
 /**
  * What the margin shows for one step. Only `answered` carries a verdict from the checker;
@@ -55,16 +56,33 @@ function buildDecorations(doc: PMNode, verdicts: ReadonlyMap<string, StepVerdict
 }
 
 /** An edited step's old answer stays visible (dimmed) as `previous` until the new one arrives. */
+function markPending(id: string, verdicts: Map<string, StepVerdict>): void {
+  const current = verdicts.get(id);
+  if (current?.state === "answered") verdicts.set(id, { state: "pending", previous: current.answer });
+  else if (current?.state !== "pending") verdicts.set(id, { state: "pending" });
+}
+
 function markEditedPending(tr: Transaction, oldDoc: PMNode, verdicts: Map<string, StepVerdict>): void {
   const before = stepNodes(oldDoc);
   for (const [id, { node }] of stepNodes(tr.doc)) {
     const old = before.get(id)?.node;
     if (old === node) continue; // ProseMirror reuses untouched nodes
-    const current = verdicts.get(id);
     if (old && old.textContent === node.textContent && old.attrs.kind === node.attrs.kind && old.attrs.detail === node.attrs.detail && old.attrs.cites === node.attrs.cites) continue;
-    if (current?.state === "answered") verdicts.set(id, { state: "pending", previous: current.answer });
-    else if (current?.state !== "pending") verdicts.set(id, { state: "pending" });
+    markPending(id, verdicts);
   }
+}
+
+/**
+ * Typing in steps (the common case): only those steps can turn pending. When none changes state
+ * (already pending from an earlier keystroke), the marks are mapped, not rebuilt for every step.
+ */
+function applyTyping(tr: Transaction, old: StepVerdictsState, edited: readonly string[], meta: VerdictMeta | undefined): StepVerdictsState {
+  const verdicts = new Map(old.verdicts);
+  for (const id of edited) markPending(id, verdicts);
+  for (const [id, verdict] of meta?.set ?? []) verdicts.set(id, verdict);
+  const unchanged = !meta && edited.every((id) => verdicts.get(id) === old.verdicts.get(id));
+  if (unchanged) return { verdicts: old.verdicts, decorations: old.decorations.map(tr.mapping, tr.doc) };
+  return { verdicts, decorations: buildDecorations(tr.doc, verdicts) };
 }
 
 /**
@@ -105,6 +123,8 @@ export const StepVerdicts = Extension.create({
           apply: (tr, old, oldState) => {
             const meta = tr.getMeta(stepVerdictsKey) as VerdictMeta | undefined;
             if (!meta && !tr.docChanged) return old;
+            const edited = tr.docChanged ? editedStepIds(tr) : null;
+            if (edited !== null) return applyTyping(tr, old, edited, meta);
             const verdicts = new Map(old.verdicts);
             if (tr.docChanged) markEditedPending(tr, oldState.doc, verdicts);
             for (const [id, verdict] of meta?.set ?? []) verdicts.set(id, verdict);

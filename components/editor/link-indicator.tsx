@@ -19,7 +19,7 @@ function describe(link: LinkState, readOnly: boolean): { mark: string; text: str
       return { mark: "○", text: "Connecting to the server…", alarm: false };
     case "online":
       if (readOnly) return { mark: "●", text: "Live: co-authors' edits appear as they type", alarm: false };
-      return link.unstored === 0
+      return link.allStored
         ? { mark: "●", text: "Everything is stored on the server", alarm: false }
         : { mark: "◐", text: "Storing your latest changes…", alarm: false };
     case "offline":
@@ -27,7 +27,7 @@ function describe(link: LinkState, readOnly: boolean): { mark: string; text: str
         mark: "▲",
         text: readOnly
           ? "Offline: showing the last copy this browser has"
-          : link.unstored === 0
+          : link.allStored
             ? "Offline: nothing waiting; edits are kept in this browser until the link returns"
             : "Offline: your changes are kept in this browser and will be merged when the link returns",
         alarm: true,

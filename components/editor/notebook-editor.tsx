@@ -4,12 +4,13 @@ import "katex/dist/katex.min.css";
 import "./notebook-editor.css";
 
 import { EditorContent, ReactNodeViewRenderer, useEditor, useEditorState } from "@tiptap/react";
-import { useEffect, useMemo, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { notebookExtensions } from "@/editor/notebook-extensions";
 import { Figure } from "@/editor/figure";
 import { SpacetimeBlock } from "@/editor/spacetime-block";
 import { Step } from "@/editor/step";
-import { stepVerdictsKey, tallyVerdicts } from "@/editor/step-verdicts";
+import { stepNumberingKey } from "@/editor/step-numbering";
+import { stepVerdictsKey, tallyVerdicts, type VerdictTally } from "@/editor/step-verdicts";
 import { EditorToolbar } from "./editor-toolbar";
 import { NotebookOutline, jumpTo } from "./notebook-outline";
 import type { NotebookEditorLoaderProps } from "./notebook-editor-loader";
@@ -22,6 +23,7 @@ import { StepView } from "./step-view";
 import { updateStepView } from "./step-view-update";
 import { useCollaboration, type Collaboration } from "./use-collaboration";
 import { colorForUser } from "@/editor/collaboration";
+import { useMediaQuery } from "@/components/ui/use-media-query";
 import { useOutline } from "./use-outline";
 import { useStepChecks } from "./use-step-checks";
 import { VerdictSummary } from "./verdict-summary";
@@ -100,6 +102,8 @@ function SharedNotebookEditor({
   }, [editor, locked]);
   useStepChecks(editor, checker);
 
+  // The selector runs on every transaction; typing keeps both plugin states, so count only when one changes.
+  const summaryCache = useRef<{ verdicts: unknown; numbers: unknown; summary: { tally: VerdictTally; probabilistic: number } } | null>(null);
   const view = useEditorState({
     editor,
     // Tiptap's state snapshot keeps the editor it had at the last transaction, so a document
@@ -108,14 +112,20 @@ function SharedNotebookEditor({
       const current = snapshot ?? editor;
       if (!current) return null;
       const verdicts = stepVerdictsKey.getState(current.state)?.verdicts;
+      const numbers = stepNumberingKey.getState(current.state)?.numbers;
+      const cached = summaryCache.current;
+      if (cached && verdicts && numbers && cached.verdicts === verdicts && cached.numbers === numbers) return cached.summary;
       let probabilistic = 0;
       for (const verdict of verdicts?.values() ?? []) {
         if (verdict.state === "answered" && verdict.answer.verdict === "verified" && verdict.answer.method.kind === "numeric") probabilistic += 1;
       }
-      return { tally: tallyVerdicts(current.state), probabilistic };
+      const summary = { tally: tallyVerdicts(current.state), probabilistic };
+      summaryCache.current = { verdicts, numbers, summary };
+      return summary;
     },
   });
   const outline = useOutline(editor);
+  const wide = useMediaQuery("(min-width: 1024px)"); // Tailwind's lg
 
   if (!editor || !view || !session.loaded) {
     return <p role="status" className="py-12 text-sm text-ink-muted">Opening the notebook…</p>;
@@ -127,17 +137,21 @@ function SharedNotebookEditor({
     // Remarks: the side list beside the text on very wide screens, below it otherwise.
     <RemarksProvider notebookId={notebookId} editor={editor}>
       <div className="grid gap-6 lg:grid-cols-[12rem_minmax(0,1fr)] 2xl:grid-cols-[12rem_minmax(0,1fr)_22rem]">
+        {/* One copy of the outline, not one per layout hidden by CSS: a long notebook's outline is thousands of elements. */}
         <nav aria-label="Outline" className="lg:sticky lg:top-4 lg:max-h-[calc(100vh-2rem)] lg:self-start lg:overflow-y-auto">
-          <details className="lg:hidden">
-            <summary className="cursor-pointer font-sans text-sm font-medium text-ink-soft">Outline</summary>
-            <div className="mt-2">
+          {wide ? (
+            <div>
+              <p className="mb-1 font-sans text-xs font-semibold uppercase tracking-wide text-ink-muted">Outline</p>
               <NotebookOutline editor={editor} entries={outline} />
             </div>
-          </details>
-          <div className="hidden lg:block">
-            <p className="mb-1 font-sans text-xs font-semibold uppercase tracking-wide text-ink-muted">Outline</p>
-            <NotebookOutline editor={editor} entries={outline} />
-          </div>
+          ) : (
+            <details>
+              <summary className="cursor-pointer font-sans text-sm font-medium text-ink-soft">Outline</summary>
+              <div className="mt-2">
+                <NotebookOutline editor={editor} entries={outline} />
+              </div>
+            </details>
+          )}
         </nav>
 
         <div className="min-w-0">

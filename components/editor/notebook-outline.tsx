@@ -12,7 +12,7 @@ const renderedRelations = new Map<string, string>();
 function relationHtml(latex: string): string {
   let html = renderedRelations.get(latex);
   if (html === undefined) {
-    html = renderLatex(latex, false).html;
+    html = renderLatex(latex, false, { visualOnly: true }).html;
     if (renderedRelations.size > 2000) renderedRelations.clear();
     renderedRelations.set(latex, html);
   }
@@ -43,7 +43,7 @@ export function NotebookOutline({ editor, entries }: { editor: Editor; entries: 
   return (
     <ol className="space-y-0.5 font-sans text-sm">
       {entries.map((entry, index) => (
-        <li key={keys[index]}>
+        <li key={keys[index]} className="outline-entry">
           <button
             type="button"
             onClick={() => jumpTo(editor, entry.pos)}
@@ -55,8 +55,14 @@ export function NotebookOutline({ editor, entries }: { editor: Editor; entries: 
               <>
                 <VerdictShape word={entry.verdict} className={verdictTone[entry.verdict] ?? "text-ink-muted"} />
                 <span className="tabular-nums">({entry.number})</span>
-                <span className="sr-only">{entry.verdict}</span>
-                <span className="outline-relation min-w-0 flex-1 overflow-hidden whitespace-nowrap text-xs text-ink-muted" dangerouslySetInnerHTML={{ __html: relationHtml(entry.relation) }} />
+                <span className="sr-only">
+                  {entry.verdict}: {entry.relation}
+                </span>
+                <span
+                  aria-hidden="true"
+                  className="outline-relation min-w-0 flex-1 overflow-hidden whitespace-nowrap text-xs text-ink-muted"
+                  dangerouslySetInnerHTML={{ __html: relationHtml(entry.relation) }}
+                />
               </>
             ) : entry.kind === "spacetime" ? (
               <span className="text-accent">◆ {entry.name || "Spacetime block"}</span>

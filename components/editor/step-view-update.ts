@@ -1,5 +1,6 @@
 import type { Node as PMNode } from "@tiptap/pm/model";
 import type { Decoration } from "@tiptap/pm/view";
+import { QuietTimer } from "@/editor/quiet-timer";
 
 interface StepViewUpdate {
   oldNode: PMNode;
@@ -10,7 +11,8 @@ interface StepViewUpdate {
 }
 
 const PREVIEW_QUIET_MS = 120;
-const pendingPreviews = new Map<string, ReturnType<typeof setTimeout>>();
+/** Per step id: the timer, and the latest re-render to run when it fires. */
+const pendingPreviews = new Map<string, { quiet: QuietTimer; updateProps: () => void }>();
 
 /** Same numbers and verdicts: our decorations carry them in their specs (attributes follow from them). */
 function sameDecorations(a: readonly Decoration[], b: readonly Decoration[]): boolean {
@@ -34,18 +36,27 @@ export function updateStepView({ oldNode, newNode, oldDecorations, newDecoration
   const id = newNode.attrs.id as string | null;
   const textOnly = id !== null && oldNode.sameMarkup(newNode) && sameDecorations(oldDecorations, newDecorations);
   const pending = id === null ? undefined : pendingPreviews.get(id);
-  if (pending !== undefined) clearTimeout(pending);
   if (!textOnly) {
-    if (id !== null) pendingPreviews.delete(id);
+    if (id !== null && pending) {
+      pending.quiet.cancel();
+      pendingPreviews.delete(id);
+    }
     updateProps();
     return true;
   }
-  pendingPreviews.set(
-    id,
-    setTimeout(() => {
+  if (pending) {
+    pending.updateProps = updateProps;
+    pending.quiet.poke();
+    return true;
+  }
+  const entry = {
+    updateProps,
+    quiet: new QuietTimer(PREVIEW_QUIET_MS, () => {
       pendingPreviews.delete(id);
-      updateProps();
-    }, PREVIEW_QUIET_MS),
-  );
+      entry.updateProps();
+    }),
+  };
+  pendingPreviews.set(id, entry);
+  entry.quiet.poke();
   return true;
 }

@@ -1,7 +1,7 @@
 "use client";
 
 import { NodeViewContent, NodeViewWrapper, type ReactNodeViewProps } from "@tiptap/react";
-import { useMemo, useState } from "react";
+import { useMemo, useRef, useState } from "react";
 import { renderLatex } from "@/editor/katex-render";
 import { JUSTIFICATION_DETAIL_HINT, JUSTIFICATION_KINDS, type JustificationKind } from "@/editor/step";
 import { stepNumberingFromDecorations, stepNumberingKey } from "@/editor/step-numbering";
@@ -9,6 +9,7 @@ import { verdictFromDecorations, verdictWord } from "@/editor/step-verdicts";
 import { VerdictMark } from "./verdict-mark";
 import { StepRemarkButton } from "@/components/remarks/remark-actions";
 import { LimitProbe } from "./limit-probe";
+import { useNearViewport } from "./use-near-viewport";
 
 const KIND_LABEL: Record<JustificationKind, string> = {
   algebra: "algebra",
@@ -40,13 +41,18 @@ function idsForNumbers(text: string, numbers: ReadonlyMap<string, number>): { id
 /**
  * A step in the editor: its number, the KaTeX rendering of its relation above the LaTeX
  * source, its justification (editable by authors), and the verdict margin beside it.
+ * Far from the screen the preview and the justification controls wait (useNearViewport); the
+ * number, source, verdict and margin buttons are always there.
  */
 export function StepView({ node, decorations, editor, updateAttributes }: ReactNodeViewProps) {
+  const wrapper = useRef<HTMLDivElement>(null);
+  const near = useNearViewport(wrapper);
   const numbering = stepNumberingFromDecorations(decorations);
   const verdict = verdictFromDecorations(decorations);
   const word = verdictWord(verdict ?? undefined);
   const relation = node.textContent;
-  const rendered = useMemo(() => (relation.trim() ? renderLatex(relation, true) : null), [relation]);
+  // The source line below is the step's readable text, so the preview is a visual copy only.
+  const rendered = useMemo(() => (near && relation.trim() ? renderLatex(relation, true, { visualOnly: true }) : null), [near, relation]);
   const editable = editor.isEditable;
   const kind = node.attrs.kind as JustificationKind;
   const id = node.attrs.id as string | null;
@@ -63,7 +69,7 @@ export function StepView({ node, decorations, editor, updateAttributes }: ReactN
     else updateAttributes({ follows: earlier[0] ?? null });
   };
 
-  const detailHtml = useMemo(() => (node.attrs.detail ? renderLatex(node.attrs.detail, false).html : null), [node.attrs.detail]);
+  const detailHtml = useMemo(() => (near && node.attrs.detail ? renderLatex(node.attrs.detail, false).html : null), [near, node.attrs.detail]);
   const justificationTail = [
     numbering.citedNumbers ? ` using ${citationList(numbering.citedNumbers)}` : "",
     numbering.followsNumber ? ` from (${numbering.followsNumber})` : "",
@@ -71,6 +77,7 @@ export function StepView({ node, decorations, editor, updateAttributes }: ReactN
 
   return (
     <NodeViewWrapper
+      ref={wrapper}
       as="div"
       id={id ? `step-${id}` : undefined}
       data-verdict={word}
@@ -82,12 +89,12 @@ export function StepView({ node, decorations, editor, updateAttributes }: ReactN
       </div>
 
       <div className={`min-w-0 border-l-2 pl-3 ${word === "refuted" ? "border-alarm" : "border-paper-edge"}`}>
-        <div contentEditable={false} className="math-preview overflow-x-auto">
+        <div contentEditable={false} className={near ? "math-preview overflow-x-auto" : "math-preview-waiting"}>
           {rendered ? (
-            <div dangerouslySetInnerHTML={{ __html: rendered.html }} />
-          ) : (
+            <div aria-hidden="true" dangerouslySetInnerHTML={{ __html: rendered.html }} />
+          ) : near || !relation.trim() ? (
             <p className="py-2 font-sans text-sm italic text-ink-muted">Empty step — type a relation in LaTeX below.</p>
-          )}
+          ) : null}
           {rendered?.error ? (
             <p role="status" className="font-sans text-xs text-alarm">
               LaTeX error: {rendered.error}
@@ -97,7 +104,7 @@ export function StepView({ node, decorations, editor, updateAttributes }: ReactN
         <NodeViewContent<"pre"> as="pre" className="math-source" spellCheck={false} aria-label={`LaTeX source of step ${numbering.stepNumber ?? ""}`} />
 
         <div contentEditable={false} className="mt-1 font-sans text-xs text-ink-soft">
-          {editable ? (
+          {editable && near ? (
             <div className="flex flex-wrap items-center gap-x-2 gap-y-1">
               <label className="flex items-center gap-1">
                 <span className="text-ink-muted">by</span>

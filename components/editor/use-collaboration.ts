@@ -10,8 +10,8 @@ import type { CoAuthor } from "@/editor/collaboration";
 /** What the page says about the link to the server, in plain words. */
 export type LinkState =
   | { kind: "connecting" }
-  | { kind: "online"; unstored: number }
-  | { kind: "offline"; unstored: number }
+  | { kind: "online"; allStored: boolean }
+  | { kind: "offline"; allStored: boolean }
   | { kind: "refused"; message: string };
 
 export interface Collaboration {
@@ -24,6 +24,8 @@ export interface Collaboration {
 }
 
 const IDLE_AFTER_MS = 60_000;
+/** "Everything is stored" is shown only once local edits have paused this long (see publish). */
+const STORED_AFTER_QUIET_MS = 400;
 
 /**
  * Opens a notebook's shared document: the websocket to our server (same origin, the
@@ -44,14 +46,28 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
     let lastInput = Date.now();
     let lastSignature = "";
 
+    let lastLocalEdit = 0;
+    let quietTimer: ReturnType<typeof setTimeout> | null = null;
+
     const publish = () => {
-      const unstored = tracker.unstoredCount();
+      // While the author types, the server acknowledges each keystroke within milliseconds, so
+      // the stored state would flip on every key and re-render the page each time (and every
+      // React commit with the caret in a long notebook costs more than the keystroke). Say
+      // "storing" until the edits pause, then look again.
+      const sinceEdit = Date.now() - lastLocalEdit;
+      if (sinceEdit < STORED_AFTER_QUIET_MS && quietTimer === null) {
+        quietTimer = setTimeout(() => {
+          quietTimer = null;
+          publish();
+        }, STORED_AFTER_QUIET_MS - sinceEdit);
+      }
+      const allStored = tracker.unstoredCount() === 0 && sinceEdit >= STORED_AFTER_QUIET_MS;
       const link: LinkState = refused
         ? { kind: "refused", message: refused }
         : provider.wsconnected && provider.synced
-          ? { kind: "online", unstored }
+          ? { kind: "online", allStored }
           : loaded
-            ? { kind: "offline", unstored }
+            ? { kind: "offline", allStored }
             : { kind: "connecting" };
       const coAuthors = [...provider.awareness.getStates().entries()]
         .filter(([clientId, state]) => clientId !== doc.clientID && state.user)
@@ -108,7 +124,11 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
     provider.on("sync", onSync);
     provider.on("connection-close", onClose);
     provider.awareness.on("change", publish);
-    doc.on("update", publishSoon);
+    const onDocUpdate = (_update: Uint8Array, origin: unknown) => {
+      if (origin !== provider && origin !== local) lastLocalEdit = Date.now();
+      publishSoon();
+    };
+    doc.on("update", onDocUpdate);
 
     const onInput = () => {
       lastInput = Date.now();
@@ -124,6 +144,7 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
     return () => {
       window.clearInterval(idleTimer);
       if (updateTimer !== null) clearTimeout(updateTimer);
+      if (quietTimer !== null) clearTimeout(quietTimer);
       window.removeEventListener("keydown", onInput);
       window.removeEventListener("pointerdown", onInput);
       document.removeEventListener("visibilitychange", onVisibility);

@@ -11,6 +11,7 @@ import { RemarkForm } from "./remark-form";
 import { RemarkThreadView } from "./remark-thread";
 import { RemarksTable, type RemarkRow } from "./remarks-table";
 import { ReviewRequestForm } from "./review-request-form";
+import { useQuietVersion } from "@/components/editor/use-quiet-version";
 import { useChangeRemark, useCreateRemark, useRemarks, type RemarkAnchor, type RemarkThread } from "./use-remarks";
 
 type PanelState = {
@@ -72,13 +73,9 @@ export function RemarksPanel({ canRequestReview }: { canRequestReview: boolean }
   const threads = useMemo(() => remarks.data?.threads ?? [], [remarks.data]);
   const permissions = remarks.data?.permissions ?? { remark: false, settle: false };
 
-  // Where each thread is depends on the live text; recomputed when threads or the document change.
-  const [docVersion, setDocVersion] = useState(0);
-  useEffect(() => {
-    const bump = () => setDocVersion((v) => v + 1);
-    editor.on("update", bump);
-    return () => void editor.off("update", bump);
-  }, [editor]);
+  // Where each thread is depends on the live text; recomputed when threads change or the text
+  // has been still for a moment (not per keystroke).
+  const docVersion = useQuietVersion(editor, "update", 300);
   const located = useMemo(() => new Map(threads.map((t) => [t.id, locate(editor, t)])), [threads, editor, docVersion]); // eslint-disable-line react-hooks/exhaustive-deps
 
   const rows: RemarkRow[] = useMemo(

@@ -18,4 +18,12 @@ describe("renderLatex", () => {
     const { html } = renderLatex("\\href{javascript:alert(1)}{x}", false);
     expect(html).not.toMatch(/<a\b|href=/); // the source may appear as text in the annotation, never as a link
   });
+
+  it("keeps the MathML tree unless a visual-only copy is asked for", () => {
+    expect(renderLatex("r_s", false).html).toContain("<math");
+    const visual = renderLatex("r_s", false, { visualOnly: true });
+    expect(visual.html).not.toContain("<math");
+    expect(visual.html).toContain("katex-html");
+    expect(renderLatex("\\frac{r_s}{", false, { visualOnly: true }).error).toMatch(/KaTeX parse error/);
+  });
 });
