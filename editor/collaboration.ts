@@ -3,6 +3,8 @@ import Collaboration from "@tiptap/extension-collaboration";
 import CollaborationCaret from "@tiptap/extension-collaboration-caret";
 import { prosemirrorJSONToYXmlFragment, yXmlFragmentToProsemirrorJSON } from "@tiptap/y-tiptap";
 import * as Y from "yjs";
+import type { Awareness } from "y-protocols/awareness";
+import { pacedAwareness } from "./paced-awareness";
 
 /** The Y.XmlFragment name that holds a notebook's document inside its Y.Doc. */
 export const NOTEBOOK_FRAGMENT = "notebook";
@@ -68,14 +70,16 @@ export function colorForUser(userId: string): string {
 
 /**
  * Co-authors' carets and selections, drawn from the provider's awareness. The caret is a
- * thin bar with the author's name in a small tab above it.
+ * thin bar with the author's name in a small tab above it. Our own caret is published when
+ * typing pauses (pacedAwareness), so co-authors see it move up to half a second late.
  *
  * @example
  * presenceExtension(websocketProvider, { name: "A. Author", color: colorForUser(id) })
  */
-export function presenceExtension(provider: unknown, user: CoAuthor): AnyExtension {
+export function presenceExtension(provider: { awareness: Awareness }, user: CoAuthor): AnyExtension {
+  // The caret plugin reads only `awareness` from the provider.
   return CollaborationCaret.configure({
-    provider,
+    provider: { awareness: pacedAwareness(provider.awareness, "cursor") },
     user,
     render: (peer: Record<string, unknown>) => {
       const caret = document.createElement("span");

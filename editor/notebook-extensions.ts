@@ -1,3 +1,4 @@
+import type { Awareness } from "y-protocols/awareness";
 import type { AnyExtension } from "@tiptap/core";
 import StarterKit from "@tiptap/starter-kit";
 import type * as Y from "yjs";
@@ -19,7 +20,7 @@ export interface NotebookExtensionOptions {
   /** Bind the document to this Y.Doc; turns the starter kit's own undo history off. */
   readonly collaboration?: { readonly document: Y.Doc; readonly field?: string };
   /** Show co-authors' carets from this provider's awareness (needs `collaboration`). */
-  readonly presence?: { readonly provider: unknown; readonly user: CoAuthor };
+  readonly presence?: { readonly provider: { awareness: Awareness }; readonly user: CoAuthor };
   /** Replacements for our nodes with a view attached (the React views live in components/). */
   readonly step?: AnyExtension;
   readonly spacetimeBlock?: AnyExtension;

@@ -9,6 +9,7 @@ import { verdictFromDecorations, verdictWord } from "@/editor/step-verdicts";
 import { VerdictMark } from "./verdict-mark";
 import { StepRemarkButton } from "@/components/remarks/remark-actions";
 import { LimitProbe } from "./limit-probe";
+import { KatexShadow } from "./katex-shadow";
 import { useNearViewport } from "./use-near-viewport";
 
 const KIND_LABEL: Record<JustificationKind, string> = {
@@ -91,7 +92,7 @@ export function StepView({ node, decorations, editor, updateAttributes }: ReactN
       <div className={`min-w-0 border-l-2 pl-3 ${word === "refuted" ? "border-alarm" : "border-paper-edge"}`}>
         <div contentEditable={false} className={near ? "math-preview overflow-x-auto" : "math-preview-waiting"}>
           {rendered ? (
-            <div aria-hidden="true" dangerouslySetInnerHTML={{ __html: rendered.html }} />
+            <KatexShadow html={rendered.html} />
           ) : near || !relation.trim() ? (
             <p className="py-2 font-sans text-sm italic text-ink-muted">Empty step — type a relation in LaTeX below.</p>
           ) : null}

@@ -5,6 +5,8 @@ import * as Y from "yjs";
 import { WebsocketProvider } from "y-websocket";
 import { IndexeddbPersistence } from "y-indexeddb";
 import { StoredStateTracker } from "@/editor/stored-state";
+import { batchLocalCopyWrites } from "./batched-local-copy";
+import { sendEditsAfterFrame } from "./send-after-frame";
 import type { CoAuthor } from "@/editor/collaboration";
 
 /** What the page says about the link to the server, in plain words. */
@@ -38,8 +40,10 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
   useEffect(() => {
     const doc = new Y.Doc();
     const local = new IndexeddbPersistence(`vierbein-notebook-${notebookId}`, doc);
+    const unbatchLocalCopy = batchLocalCopyWrites(local, doc);
     const scheme = window.location.protocol === "https:" ? "wss" : "ws";
     const provider = new WebsocketProvider(`${scheme}://${window.location.host}/yjs`, notebookId, doc, { maxBackoffTime: 5_000 });
+    const sendAtOnce = sendEditsAfterFrame(provider, doc);
     const tracker = new StoredStateTracker(doc);
     let loaded = false;
     let refused: string | null = null;
@@ -149,7 +153,9 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
       window.removeEventListener("pointerdown", onInput);
       document.removeEventListener("visibilitychange", onVisibility);
       provider.ws?.removeEventListener("message", onServerMessage);
+      sendAtOnce();
       provider.destroy();
+      unbatchLocalCopy();
       void local.destroy();
       doc.destroy();
       setSession(null);

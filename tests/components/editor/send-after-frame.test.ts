@@ -1,0 +1,68 @@
+import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
+import * as Y from "yjs";
+import type { WebsocketProvider } from "y-websocket";
+import { sendEditsAfterFrame } from "@/components/editor/send-after-frame";
+
+describe("sendEditsAfterFrame", () => {
+  let frames: (() => void)[] = [];
+  beforeEach(() => {
+    vi.useFakeTimers();
+    frames = [];
+    vi.stubGlobal("requestAnimationFrame", (callback: () => void) => frames.push(callback));
+  });
+  afterEach(() => {
+    vi.useRealTimers();
+    vi.unstubAllGlobals();
+  });
+
+  /** A document with a stand-in provider that records what it would broadcast. */
+  const setup = () => {
+    const doc = new Y.Doc();
+    const sent: Uint8Array[] = [];
+    const provider = { _updateHandler: (update: Uint8Array) => sent.push(update) } as unknown as WebsocketProvider;
+    doc.on("update", provider._updateHandler); // as y-websocket registers itself
+    const undo = sendEditsAfterFrame(provider, doc);
+    const type = (text: string) => {
+      for (const ch of text) doc.getText("t").insert(doc.getText("t").length, ch);
+    };
+    const received = () => {
+      const copy = new Y.Doc();
+      for (const update of sent) Y.applyUpdate(copy, update);
+      return copy.getText("t").toString();
+    };
+    return { doc, provider, sent, undo, type, received };
+  };
+
+  it("holds edits until the next frame has been drawn, then sends them as one message", () => {
+    const { sent, type, received } = setup();
+    type("E^2");
+    expect(sent).toHaveLength(0);
+    for (const frame of frames.splice(0)) frame();
+    expect(sent).toHaveLength(0); // after the frame, not inside it
+    vi.advanceTimersByTime(0);
+    expect(sent).toHaveLength(1);
+    expect(received()).toBe("E^2");
+  });
+
+  it("sends within 100 ms when no frame comes (a hidden tab), and never echoes the server's updates", () => {
+    const { doc, provider, sent, type } = setup();
+    type("L");
+    vi.advanceTimersByTime(100);
+    expect(sent).toHaveLength(1);
+    const remote = new Y.Doc();
+    remote.getText("t").insert(0, "from a co-author");
+    Y.applyUpdate(doc, Y.encodeStateAsUpdate(remote), provider);
+    vi.advanceTimersByTime(200);
+    expect(sent).toHaveLength(1);
+  });
+
+  it("sends what it holds when undone, and stops holding", () => {
+    const { sent, type, undo, received } = setup();
+    type("ab");
+    undo();
+    expect(received()).toBe("ab");
+    type("c");
+    vi.advanceTimersByTime(200);
+    expect(sent).toHaveLength(1);
+  });
+});
