@@ -1,3 +1,4 @@
+import { afterNextFrame } from "./after-frame";
 import { QuietTimer } from "./quiet-timer";
 
 /** The part of a y-protocols Awareness this module touches. */
@@ -11,7 +12,7 @@ export const CARET_MAX_WAIT_MS = 500;
 
 /**
  * The awareness as the caret plugin sees it: our own caret position is published once typing
- * pauses (at the latest every CARET_MAX_WAIT_MS), not on every keystroke. Each publication is
+ * pauses (while typing goes on, every CARET_MAX_WAIT_MS, after a frame), not on every keystroke. Each publication is
  * sent to every co-author and makes the caret plugin dispatch a second editor transaction, which
  * cost about a millisecond per keystroke. Clearing the caret (blur, close) goes out at once.
  *
@@ -21,8 +22,10 @@ export const CARET_MAX_WAIT_MS = 500;
 export function pacedAwareness<A extends AwarenessLike>(awareness: A, field: string, quietMs = CARET_QUIET_MS, maxWaitMs = CARET_MAX_WAIT_MS): A {
   let latest: unknown = undefined;
   let firstHeldAt: number | null = null;
+  let overdue = false;
   const publish = () => {
     firstHeldAt = null;
+    overdue = false;
     awareness.setLocalStateField(field, latest);
   };
   const quiet = new QuietTimer(quietMs, publish);
@@ -35,9 +38,12 @@ export function pacedAwareness<A extends AwarenessLike>(awareness: A, field: str
     }
     const now = Date.now();
     firstHeldAt ??= now;
+    if (overdue) return;
     if (now - firstHeldAt >= maxWaitMs) {
+      // Held too long while typing goes on: publish, but after this keystroke's frame.
       quiet.cancel();
-      publish();
+      overdue = true;
+      afterNextFrame(publish);
       return;
     }
     quiet.poke();

@@ -2,6 +2,7 @@
 
 import * as Y from "yjs";
 import type { IndexeddbPersistence } from "y-indexeddb";
+import { afterNextFrame } from "@/editor/after-frame";
 import { QuietTimer } from "@/editor/quiet-timer";
 
 const QUIET_MS = 250;
@@ -24,13 +25,20 @@ export function batchLocalCopyWrites(local: IndexeddbPersistence, doc: Y.Doc): (
     local._storeUpdate(merged, null);
   };
   const quiet = new QuietTimer(QUIET_MS, write);
+  let overdue = false;
   const onUpdate = (update: Uint8Array, origin: unknown) => {
     if (origin === local) return; // y-indexeddb's own reads
     if (!held.length) firstHeldAt = Date.now();
     held.push(update);
+    if (overdue) return;
     if (Date.now() - firstHeldAt >= MAX_WAIT_MS) {
+      // Typing has gone on for a while: write, but after this keystroke's frame.
       quiet.cancel();
-      write();
+      overdue = true;
+      afterNextFrame(() => {
+        overdue = false;
+        write();
+      });
     } else quiet.poke();
   };
   const onHide = () => {

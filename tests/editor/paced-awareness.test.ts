@@ -32,6 +32,7 @@ describe("pacedAwareness", () => {
       paced.setLocalStateField("cursor", { anchor: t, head: t });
       vi.advanceTimersByTime(60);
     }
+    vi.advanceTimersByTime(100); // the overdue publication waits for a frame (here: its 100 ms fallback)
     expect(changes).toHaveBeenCalledTimes(1);
   });
 
