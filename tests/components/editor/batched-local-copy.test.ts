@@ -1,7 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import * as Y from "yjs";
 import type { IndexeddbPersistence } from "y-indexeddb";
 import { batchLocalCopyWrites } from "@/components/editor/batched-local-copy";
+import { recordingDoc } from "./support/recording-doc";
 
 // The page objects the batcher listens to, as plain event targets (the tests run in Node).
 const page = { document: Object.assign(new EventTarget(), { visibilityState: "visible" }), window: new EventTarget() };
@@ -19,19 +19,9 @@ describe("batchLocalCopyWrites", () => {
 
   /** A document with a stand-in for y-indexeddb: it records what would be written. */
   const setup = () => {
-    const doc = new Y.Doc();
-    const written: Uint8Array[] = [];
-    const local = { _storeUpdate: (update: Uint8Array) => written.push(update) } as unknown as IndexeddbPersistence;
-    doc.on("update", local._storeUpdate); // as y-indexeddb registers itself
+    const { doc, recorded: written, record, type, replayed } = recordingDoc();
+    const local = { _storeUpdate: record } as unknown as IndexeddbPersistence;
     const undo = batchLocalCopyWrites(local, doc);
-    const type = (text: string) => {
-      for (const ch of text) doc.getText("t").insert(doc.getText("t").length, ch);
-    };
-    const replayed = () => {
-      const copy = new Y.Doc();
-      for (const update of written) Y.applyUpdate(copy, update);
-      return copy.getText("t").toString();
-    };
     return { doc, written, undo, type, replayed };
   };
 

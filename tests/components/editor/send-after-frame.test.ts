@@ -2,6 +2,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import * as Y from "yjs";
 import type { WebsocketProvider } from "y-websocket";
 import { sendEditsAfterFrame } from "@/components/editor/send-after-frame";
+import { recordingDoc } from "./support/recording-doc";
 
 describe("sendEditsAfterFrame", () => {
   let frames: (() => void)[] = [];
@@ -17,19 +18,9 @@ describe("sendEditsAfterFrame", () => {
 
   /** A document with a stand-in provider that records what it would broadcast. */
   const setup = () => {
-    const doc = new Y.Doc();
-    const sent: Uint8Array[] = [];
-    const provider = { _updateHandler: (update: Uint8Array) => sent.push(update) } as unknown as WebsocketProvider;
-    doc.on("update", provider._updateHandler); // as y-websocket registers itself
+    const { doc, recorded: sent, record, type, replayed: received } = recordingDoc();
+    const provider = { _updateHandler: record } as unknown as WebsocketProvider;
     const undo = sendEditsAfterFrame(provider, doc);
-    const type = (text: string) => {
-      for (const ch of text) doc.getText("t").insert(doc.getText("t").length, ch);
-    };
-    const received = () => {
-      const copy = new Y.Doc();
-      for (const update of sent) Y.applyUpdate(copy, update);
-      return copy.getText("t").toString();
-    };
     return { doc, provider, sent, undo, type, received };
   };
 
