@@ -4,6 +4,7 @@ import { useEffect, useState } from "react";
 import * as Y from "yjs";
 import { WebsocketProvider } from "y-websocket";
 import { IndexeddbPersistence } from "y-indexeddb";
+import { QuietTimer } from "@/editor/quiet-timer";
 import { StoredStateTracker } from "@/editor/stored-state";
 import { batchLocalCopyWrites } from "./batched-local-copy";
 import { sendEditsAfterFrame } from "./send-after-frame";
@@ -40,32 +41,24 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
   useEffect(() => {
     const doc = new Y.Doc();
     const local = new IndexeddbPersistence(`vierbein-notebook-${notebookId}`, doc);
-    const unbatchLocalCopy = batchLocalCopyWrites(local, doc);
+    const stopBatchingLocalCopy = batchLocalCopyWrites(local, doc);
     const scheme = window.location.protocol === "https:" ? "wss" : "ws";
     const provider = new WebsocketProvider(`${scheme}://${window.location.host}/yjs`, notebookId, doc, { maxBackoffTime: 5_000 });
-    const sendAtOnce = sendEditsAfterFrame(provider, doc);
+    const stopDeferringSends = sendEditsAfterFrame(provider, doc);
     const tracker = new StoredStateTracker(doc);
     let loaded = false;
     let refused: string | null = null;
     let lastInput = Date.now();
     let lastSignature = "";
 
-    let lastLocalEdit = 0;
-    let quietTimer: ReturnType<typeof setTimeout> | null = null;
+    // While the author types, the server acknowledges each keystroke within milliseconds, so the
+    // stored state would flip on every key and re-render the page each time (and every React
+    // commit with the caret in a long notebook costs more than the keystroke). Say "storing"
+    // until local edits pause, then look again.
+    const editsSettle = new QuietTimer(STORED_AFTER_QUIET_MS, () => publish());
 
     const publish = () => {
-      // While the author types, the server acknowledges each keystroke within milliseconds, so
-      // the stored state would flip on every key and re-render the page each time (and every
-      // React commit with the caret in a long notebook costs more than the keystroke). Say
-      // "storing" until the edits pause, then look again.
-      const sinceEdit = Date.now() - lastLocalEdit;
-      if (sinceEdit < STORED_AFTER_QUIET_MS && quietTimer === null) {
-        quietTimer = setTimeout(() => {
-          quietTimer = null;
-          publish();
-        }, STORED_AFTER_QUIET_MS - sinceEdit);
-      }
-      const allStored = tracker.unstoredCount() === 0 && sinceEdit >= STORED_AFTER_QUIET_MS;
+      const allStored = tracker.unstoredCount() === 0 && !editsSettle.waiting;
       const link: LinkState = refused
         ? { kind: "refused", message: refused }
         : provider.wsconnected && provider.synced
@@ -129,7 +122,7 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
     provider.on("connection-close", onClose);
     provider.awareness.on("change", publish);
     const onDocUpdate = (_update: Uint8Array, origin: unknown) => {
-      if (origin !== provider && origin !== local) lastLocalEdit = Date.now();
+      if (origin !== provider && origin !== local) editsSettle.poke();
       publishSoon();
     };
     doc.on("update", onDocUpdate);
@@ -148,14 +141,14 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
     return () => {
       window.clearInterval(idleTimer);
       if (updateTimer !== null) clearTimeout(updateTimer);
-      if (quietTimer !== null) clearTimeout(quietTimer);
+      editsSettle.cancel();
       window.removeEventListener("keydown", onInput);
       window.removeEventListener("pointerdown", onInput);
       document.removeEventListener("visibilitychange", onVisibility);
       provider.ws?.removeEventListener("message", onServerMessage);
-      sendAtOnce();
+      stopDeferringSends();
       provider.destroy();
-      unbatchLocalCopy();
+      stopBatchingLocalCopy();
       void local.destroy();
       doc.destroy();
       setSession(null);
