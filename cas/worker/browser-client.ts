@@ -2,7 +2,7 @@
 // Browser only: never import this from server code (it creates a Web Worker).
 import type { CheckAnswer, CheckError, CheckRequest } from "../check/protocol";
 import type { VerbOutcome } from "../api/index";
-import { DEFAULT_TIME_LIMIT_MS, timeoutError } from "./limits";
+import { DEFAULT_TIME_LIMIT_MS, WORKER_STARTUP_LIMIT_MS, timeoutError } from "./limits";
 
 export interface BrowserChecker {
   /** Checks one step; resolves with the answer or a CheckError (never rejects). */
@@ -25,7 +25,7 @@ const aborted: CheckError = { error: { code: "aborted", message: "the check was 
 
 /**
  * A checker running in a Web Worker, one request at a time, each under a hard
- * time limit: a request that overruns (or is aborted while running) terminates
+ * time limit counted from when the worker has loaded: a request that overruns (or is aborted while running) terminates
  * the worker, which is replaced by a fresh one for the next request, so the
  * page never freezes.
  *
@@ -35,18 +35,34 @@ const aborted: CheckError = { error: { code: "aborted", message: "the check was 
  * if ("error" in answer) showError(answer.error.message); else showVerdict(answer.verdict);
  * checker.dispose();
  */
-export function createBrowserChecker(options: { timeLimitMs?: number } = {}): BrowserChecker {
+export function createBrowserChecker(options: { timeLimitMs?: number; startupLimitMs?: number } = {}): BrowserChecker {
   if (typeof window === "undefined" || typeof Worker === "undefined") throw new Error("createBrowserChecker runs in the browser only");
   const timeLimitMs = options.timeLimitMs ?? DEFAULT_TIME_LIMIT_MS;
+  const startupLimitMs = options.startupLimitMs ?? WORKER_STARTUP_LIMIT_MS;
   const queue: Job[] = [];
   let worker: Worker | null = null;
+  // The worker says when its bundle has loaded; until then the running request waits under the
+  // startup limit, and its own time limit starts only once the worker can work on it.
+  let ready = false;
   let current: { job: Job; timer: ReturnType<typeof setTimeout>; onAbort: () => void } | null = null;
   let nextId = 1;
   let disposed = false;
 
+  const armTimeLimit = () => {
+    if (!current) return;
+    clearTimeout(current.timer);
+    current.timer = setTimeout(() => restart({ error: timeoutError(timeLimitMs) }), timeLimitMs);
+  };
+
   const start = (): Worker => {
+    ready = false;
     const w = new Worker(new URL("./cas.worker.ts", import.meta.url), { type: "module" });
-    w.onmessage = (event: MessageEvent<{ id: number; outcome: VerbOutcome }>) => {
+    w.onmessage = (event: MessageEvent<{ ready: true } | { id: number; outcome: VerbOutcome }>) => {
+      if ("ready" in event.data) {
+        ready = true;
+        armTimeLimit();
+        return;
+      }
       if (!current || event.data.id !== current.job.id) return;
       const { outcome } = event.data;
       finish(outcome.ok ? outcome.value : { error: outcome.error });
@@ -87,7 +103,9 @@ export function createBrowserChecker(options: { timeLimitMs?: number } = {}): Br
     worker ??= start();
     const onAbort = () => restart(aborted);
     job.signal?.addEventListener("abort", onAbort, { once: true });
-    current = { job, onAbort, timer: setTimeout(() => restart({ error: timeoutError(timeLimitMs) }), timeLimitMs) };
+    const notStarted = { error: { code: "internal", message: `the checker did not start within ${startupLimitMs / 1000} s; reload the page` } } as const;
+    current = { job, onAbort, timer: setTimeout(() => restart(notStarted), startupLimitMs) };
+    if (ready) armTimeLimit();
     worker.postMessage({ id: job.id, verb: job.verb, input: job.input });
   };
 

@@ -5,6 +5,8 @@
  * more than 5000 nodes.
  */
 export const DEFAULT_TIME_LIMIT_MS = 2000;
+/** How long a new Web Worker may take to load its bundle before its request is given up. */
+export const WORKER_STARTUP_LIMIT_MS = 30_000;
 /** Largest JSON request accepted by the route and the CLI, in bytes. */
 export const MAX_REQUEST_BYTES = 256 * 1024;
 /** Heap of one Node worker; a request that needs more kills only its worker. */

@@ -6,10 +6,15 @@ import { runVerb } from "../../../cas/api/index";
 class FakeWorker {
   static created = 0;
   static hang = false;
+  /** How long the stand-in takes to "load" before it says it is ready; null: never. */
+  static startupMs: number | null = 0;
   terminated = false;
   onmessage: ((e: MessageEvent) => void) | null = null;
   onerror: ((e: Event) => void) | null = null;
-  constructor() { FakeWorker.created += 1; }
+  constructor() {
+    FakeWorker.created += 1;
+    if (FakeWorker.startupMs !== null) setTimeout(() => { if (!this.terminated) this.onmessage?.({ data: { ready: true } } as MessageEvent); }, FakeWorker.startupMs);
+  }
   postMessage(data: { id: number; verb: string; input: unknown }) {
     if (FakeWorker.hang) return;
     setTimeout(() => { if (!this.terminated) this.onmessage?.({ data: { id: data.id, outcome: runVerb(data.verb, data.input) } } as MessageEvent); }, 0);
@@ -20,6 +25,7 @@ class FakeWorker {
 beforeEach(() => {
   FakeWorker.created = 0;
   FakeWorker.hang = false;
+  FakeWorker.startupMs = 0;
   vi.stubGlobal("window", {});
   vi.stubGlobal("Worker", FakeWorker);
 });
@@ -42,6 +48,21 @@ describe("createBrowserChecker", () => {
     FakeWorker.hang = false;
     expect(await checker.check({ context: {}, from: "x", to: "x" })).toMatchObject({ verdict: "verified" });
     expect(FakeWorker.created).toBe(2);
+    checker.dispose();
+  });
+
+  it("does not charge a slow worker start to the first request's time limit", async () => {
+    FakeWorker.startupMs = 60;
+    const checker = createBrowserChecker({ timeLimitMs: 20 });
+    expect(await checker.check({ context: {}, from: "(a+b)^2", to: "a^2+2ab+b^2" })).toMatchObject({ verdict: "verified" });
+    checker.dispose();
+  });
+
+  it("gives up with a clear error when the worker never starts", async () => {
+    FakeWorker.startupMs = null;
+    FakeWorker.hang = true;
+    const checker = createBrowserChecker({ timeLimitMs: 20, startupLimitMs: 50 });
+    expect(await checker.check({ context: {}, from: "x", to: "x" })).toMatchObject({ error: { code: "internal", message: expect.stringMatching(/did not start/) } });
     checker.dispose();
   });
 
