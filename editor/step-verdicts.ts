@@ -77,11 +77,12 @@ function markEditedPending(tr: Transaction, oldDoc: PMNode, verdicts: Map<string
  * (already pending from an earlier keystroke), the marks are mapped, not rebuilt for every step.
  */
 function applyTyping(tr: Transaction, old: StepVerdictsState, edited: readonly string[], meta: VerdictMeta | undefined): StepVerdictsState {
+  // Already pending steps stay as they are: then nothing changes, and nothing is copied.
+  const unchanged = !meta && edited.every((id) => old.verdicts.get(id)?.state === "pending");
+  if (unchanged) return { verdicts: old.verdicts, decorations: old.decorations.map(tr.mapping, tr.doc) };
   const verdicts = new Map(old.verdicts);
   for (const id of edited) markPending(id, verdicts);
   for (const [id, verdict] of meta?.set ?? []) verdicts.set(id, verdict);
-  const unchanged = !meta && edited.every((id) => verdicts.get(id) === old.verdicts.get(id));
-  if (unchanged) return { verdicts: old.verdicts, decorations: old.decorations.map(tr.mapping, tr.doc) };
   return { verdicts, decorations: buildDecorations(tr.doc, verdicts) };
 }
 
