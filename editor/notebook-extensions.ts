@@ -15,6 +15,7 @@ import { StepIds } from "./step-ids";
 import { StepNumbering } from "./step-numbering";
 import { StepRef } from "./step-ref";
 import { StepVerdicts } from "./step-verdicts";
+import { TypedText } from "./typed-text";
 
 export interface NotebookExtensionOptions {
   /** Bind the document to this Y.Doc; turns the starter kit's own undo history off. */
@@ -56,6 +57,7 @@ export function notebookExtensions(options: NotebookExtensionOptions = {}): AnyE
     MathSourceFocus,
     MathShortcuts,
     LatexPaste,
+    TypedText,
     ...(options.collaboration ? [collaborationExtension(options.collaboration.document, options.collaboration.field)] : []),
     ...(options.collaboration && options.presence ? [presenceExtension(options.presence.provider, options.presence.user)] : []),
   ];
