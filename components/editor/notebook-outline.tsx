@@ -1,8 +1,10 @@
 "use client";
 
+import { useRef } from "react";
 import type { Editor } from "@tiptap/core";
 import { renderLatex } from "@/editor/katex-render";
 import type { OutlineEntry } from "@/editor/outline";
+import { useNearViewport } from "./use-near-viewport";
 import { VerdictShape } from "./verdict-mark";
 
 const verdictTone: Record<string, string> = { verified: "text-accent", refuted: "text-alarm", undecided: "text-[#7a5a12]" };
@@ -17,6 +19,27 @@ function relationHtml(latex: string): string {
     renderedRelations.set(latex, html);
   }
   return html;
+}
+
+/** Entries within about half a screen of the outline's visible part show KaTeX. */
+const OUTLINE_NEAR_MARGIN = "400px 0px";
+
+/**
+ * A step's relation in one line: KaTeX near the visible part of the outline, its LaTeX source
+ * further away. KaTeX lays out each symbol as its own positioned box, so 300 rendered entries
+ * were two thirds of a long notebook's page and cost compositing time in every frame, typing
+ * included; the far ones now cost a line of text until they are scrolled near.
+ */
+function OutlineRelation({ latex }: { latex: string }) {
+  const box = useRef<HTMLSpanElement>(null);
+  const near = useNearViewport(box, OUTLINE_NEAR_MARGIN);
+  return near ? (
+    <span ref={box} aria-hidden="true" className="outline-relation min-w-0 flex-1 overflow-hidden whitespace-nowrap text-xs text-ink-muted" dangerouslySetInnerHTML={{ __html: relationHtml(latex) }} />
+  ) : (
+    <span ref={box} aria-hidden="true" className="outline-relation min-w-0 flex-1 overflow-hidden whitespace-nowrap font-mono text-xs text-ink-muted">
+      {latex}
+    </span>
+  );
 }
 
 /**
@@ -46,6 +69,7 @@ export function NotebookOutline({ editor, entries }: { editor: Editor; entries: 
         <li key={keys[index]} className="outline-entry">
           <button
             type="button"
+            aria-label={entry.kind === "step" ? `(${entry.number}) ${entry.verdict}: ${entry.relation}` : undefined}
             onClick={() => jumpTo(editor, entry.pos)}
             className={`flex w-full items-center gap-1.5 rounded px-1.5 py-0.5 text-left hover:bg-paper-deep ${
               entry.kind === "section" ? (entry.level === 2 ? "mt-2 font-semibold text-ink" : "mt-1 pl-3 font-medium text-ink-soft") : "pl-4 text-ink-soft"
@@ -55,14 +79,7 @@ export function NotebookOutline({ editor, entries }: { editor: Editor; entries: 
               <>
                 <VerdictShape word={entry.verdict} className={verdictTone[entry.verdict] ?? "text-ink-muted"} />
                 <span className="tabular-nums">({entry.number})</span>
-                <span className="sr-only">
-                  {entry.verdict}: {entry.relation}
-                </span>
-                <span
-                  aria-hidden="true"
-                  className="outline-relation min-w-0 flex-1 overflow-hidden whitespace-nowrap text-xs text-ink-muted"
-                  dangerouslySetInnerHTML={{ __html: relationHtml(entry.relation) }}
-                />
+                <OutlineRelation latex={entry.relation} />
               </>
             ) : entry.kind === "spacetime" ? (
               <span className="text-accent">◆ {entry.name || "Spacetime block"}</span>
