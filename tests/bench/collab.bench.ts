@@ -32,6 +32,10 @@ function startServer(dataDir: string): Promise<{ proc: ChildProcess; port: numbe
   });
 }
 
+// y-websocket's provider adds a process "exit" listener in Node; this script holds up to 100
+// clients in one process on purpose, which is not the leak Node's warning guesses at.
+process.setMaxListeners(120);
+
 const rssMb = (pid: number) => Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${pid}/status`, "utf8"))![1]) / 1024;
 
 async function echoLatency(url: string, notebookId: string, users: string[], clients: number, samples: number): Promise<number[]> {
