@@ -59,3 +59,22 @@ export const Figure = Node.create({
     return `[Figure: ${node.attrs.caption || "untitled"}]`;
   },
 });
+
+/** A document (or any part of one) in Tiptap's JSON form, as stored and exchanged. */
+interface JsonNode {
+  readonly type?: string;
+  readonly attrs?: Record<string, unknown> | null;
+  readonly content?: readonly JsonNode[];
+}
+
+/**
+ * Whether a figure anywhere in this document shows the attachment. Removing an attachment a
+ * figure still shows would leave an empty frame in the notebook, so the server asks first.
+ *
+ * @example
+ * placesAttachment({ type: "doc", content: [{ type: "figure", attrs: { attachmentId: "a1" } }] }, "a1") // true
+ */
+export function placesAttachment(node: JsonNode, attachmentId: string): boolean {
+  if (node.type === "figure" && node.attrs?.attachmentId === attachmentId) return true;
+  return (node.content ?? []).some((child) => placesAttachment(child, attachmentId));
+}

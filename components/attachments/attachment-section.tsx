@@ -50,6 +50,14 @@ export function AttachmentSection({ notebookId, canWrite }: { notebookId: string
   const place = useMutation({
     mutationFn: (id: string) => fetchJson(`/api/attachments/${id}/figure`, { method: "POST", json: {} }),
   });
+  // Removal cannot be undone, so the browser asks first; the server refuses what a figure or an edition shows.
+  const remove = useMutation({
+    mutationFn: (attachment: AttachmentRow) => fetchJson(`/api/attachments/${attachment.id}`, { method: "DELETE" }),
+    onSuccess: () => void client.invalidateQueries({ queryKey: key }),
+  });
+  const confirmRemove = (attachment: AttachmentRow) => {
+    if (window.confirm(`Remove ${attachment.fileName}? Its file is deleted; this cannot be undone.`)) remove.mutate(attachment);
+  };
   const fileError = form.formState.errors.file?.message;
 
   return (
@@ -86,6 +94,8 @@ export function AttachmentSection({ notebookId, canWrite }: { notebookId: string
       {upload.isError && <Notice kind="problem">{upload.error.message}</Notice>}
       {upload.isSuccess && <Notice kind="success">Uploaded.</Notice>}
       {place.isError && <Notice kind="problem">{place.error.message}</Notice>}
+      {remove.isError && <Notice kind="problem">{remove.error.message}</Notice>}
+      {remove.isSuccess && <Notice kind="success">Removed {remove.variables.fileName}.</Notice>}
       {place.isSuccess && <Notice kind="success">The figure is placed at the end of the notebook; drag it where it belongs.</Notice>}
       {list.isError ? (
         <Notice kind="problem">{list.error.message}</Notice>
@@ -100,6 +110,11 @@ export function AttachmentSection({ notebookId, canWrite }: { notebookId: string
               {canWrite && a.figure && (
                 <Button tone="quiet" className="!px-2 !py-0.5 text-xs" disabled={place.isPending} onClick={() => place.mutate(a.id)}>
                   Place in the notebook<span className="sr-only">: {a.fileName}</span>
+                </Button>
+              )}
+              {canWrite && (
+                <Button tone="quiet" className="!px-2 !py-0.5 text-xs" disabled={remove.isPending} onClick={() => confirmRemove(a)}>
+                  Remove<span className="sr-only">: {a.fileName}</span>
                 </Button>
               )}
             </li>

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ListObjectsV2Command, S3Client } from "@aws-sdk/client-s3";
 import type { CurrentUser } from "@/app/_server/auth";
 import { GET as listRoute, POST as uploadRoute } from "@/app/api/notebooks/[id]/attachments/route";
-import { GET as downloadRoute } from "@/app/api/attachments/[id]/route";
+import { DELETE as removeRoute, GET as downloadRoute } from "@/app/api/attachments/[id]/route";
 import { POST as placeRoute } from "@/app/api/attachments/[id]/figure/route";
 import { readNotebookDocument } from "@/app/_server/collab/documents";
 import { startLocalObjectStore, type LocalObjectStore } from "@/app/_server/storage/local-s3";
@@ -13,6 +13,7 @@ import { createGroupWithLead } from "@/db/queries/groups";
 import { addMember } from "@/db/queries/members";
 import { createNotebook } from "@/db/queries/notebooks";
 import { listAttachments } from "@/db/queries/attachments";
+import { createEdition } from "@/db/queries/editions";
 import { tinyPng } from "../../support/png";
 
 let lead: CurrentUser, reader: CurrentUser, outsider: CurrentUser;
@@ -120,5 +121,45 @@ describe("downloading and placing", () => {
     signInAs(reader);
     const { attachments } = await (await listRoute(jsonRequest("GET", "/x"), routeParams({ id: notebookId }))).json();
     expect(attachments).toHaveLength(2);
+  });
+});
+
+describe("removing", () => {
+  const remove = (id: string, as: CurrentUser | null = lead) => {
+    signInAs(as);
+    return removeRoute(jsonRequest("DELETE", "/x"), routeParams({ id }));
+  };
+
+  it("refuses readers and signed-out visitors, and keeps the attachment", async () => {
+    const [csv] = (await listAttachments({ db: await getDb(), notebookId })).filter((a) => a.contentType === "text/csv");
+    expect((await remove(csv.id, reader)).status).toBe(403);
+    expect((await remove(csv.id, null)).status).toBe(401);
+    expect(await rowCount()).toBe(2);
+  });
+
+  it("refuses while a figure in the notebook shows it", async () => {
+    const [png] = (await listAttachments({ db: await getDb(), notebookId })).filter((a) => a.contentType === "image/png");
+    const response = await remove(png.id);
+    expect(response.status).toBe(409);
+    expect((await response.json()).error.message).toMatch(/remove the figure first/);
+    expect(await storedObjects()).toHaveLength(2);
+  });
+
+  it("removes data no figure shows: the row and the bytes go, a second removal finds nothing", async () => {
+    const [csv] = (await listAttachments({ db: await getDb(), notebookId })).filter((a) => a.contentType === "text/csv");
+    expect((await remove(csv.id)).status).toBe(204);
+    expect(await rowCount()).toBe(1);
+    expect(await storedObjects()).toHaveLength(1);
+    expect((await remove(csv.id)).status).toBe(404);
+  });
+
+  it("keeps for good what a published edition shows, even once no figure in the notebook does", async () => {
+    const { attachment } = await (await upload("residuals.png", tinyPng())).json();
+    const content = { type: "doc", content: [{ type: "figure", attrs: { attachmentId: attachment.id, format: "image", caption: "" } }] };
+    await createEdition({ db: await getDb(), notebookId, title: "Potential plots", content, ledger: [], reason: null, publishedBy: lead.id, hashFor: () => "0".repeat(64) });
+    const response = await remove(attachment.id);
+    expect(response.status).toBe(409);
+    expect((await response.json()).error.message).toMatch(/published edition/);
+    expect(await storedObjects()).toHaveLength(2);
   });
 });
