@@ -101,6 +101,8 @@ async function typingLatency(page: Page, keystrokes: string): Promise<{ latencie
   const source = page.getByLabel("LaTeX source of step 150", { exact: true });
   await source.click();
   await page.keyboard.press("End");
+  // let the End key's own frame pass, or its latency lands among the typed keys'
+  await page.evaluate(() => new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 50))));
   await page.evaluate(() => {
     const w = window as unknown as { __lat: number[]; __pendingSeen: number | null; __settled: number | null };
     w.__lat = [];
