@@ -1,9 +1,10 @@
 import "server-only";
 import type { Db } from "@/db/client";
 import { getDb } from "@/db/client";
+import { getAttachmentById } from "@/db/queries/attachments";
 import { recordAudit } from "@/db/queries/audit";
 import { getRolesForUser } from "@/db/queries/roles";
-import type { Group, Notebook } from "@/db/schema";
+import type { Attachment, Group, Notebook } from "@/db/schema";
 import type { CurrentUser } from "./auth";
 import { getCurrentUser } from "./auth";
 import { can, type Action, type Actor, type GroupAction, type NotebookAction, type ResourceFor } from "./authz";
@@ -88,11 +89,25 @@ export async function admitToNotebook({ notebookId, action, request }: { noteboo
   Admitted & { notebook: Notebook; resource: ResourceFor<NotebookAction> }
 > {
   const user = await requireUser();
-  const db = await getDb();
+  return admitUserToNotebook({ user, db: await getDb(), notebookId, action, request });
+}
+
+async function admitUserToNotebook({ user, db, notebookId, action, request }: { user: CurrentUser; db: Db; notebookId: string; action: NotebookAction; request: Request }) {
   const { notebook, resource } = await findNotebook(db, notebookId);
   const actor = await loadActor({ db, user });
   await authorize({ db, actor, action, resource, request });
   return { db, user, actor, notebook, resource };
+}
+
+/** The same for a route on one attachment, judged by its notebook: 401, then 404 not_found:attachment, then as admitToNotebook. */
+export async function admitToAttachment({ attachmentId, action, request }: { attachmentId: string; action: NotebookAction; request: Request }): Promise<
+  Admitted & { notebook: Notebook; attachment: Attachment }
+> {
+  const user = await requireUser();
+  const db = await getDb();
+  const attachment = await getAttachmentById({ db, id: attachmentId });
+  if (!attachment) throw new AppError("not_found:attachment", "No attachment with that id.");
+  return { ...(await admitUserToNotebook({ user, db, notebookId: attachment.notebookId, action, request })), attachment };
 }
 
 /** Records a change that went through (who changed what), for the group's history. */

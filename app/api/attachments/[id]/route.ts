@@ -16,7 +16,7 @@ import { getCurrentUser } from "@/app/_server/auth";
 import { readNotebookDocument } from "@/app/_server/collab/documents";
 import { findNotebook } from "@/app/_server/editions/notebook-lookup";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToAttachment, auditChange, authorize, loadActor } from "@/app/_server/guard";
 import { parseParams } from "@/app/_server/parse";
 import { deleteObject, getObject } from "@/app/_server/storage/object-store";
 import { attachmentParams } from "./schema";
@@ -59,13 +59,7 @@ export const GET = handleRoute<Params>(async (request, { params }) => {
 
 export const DELETE = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, attachmentParams);
-  const user = await requireUser();
-  const db = await getDb();
-  const attachment = await getAttachmentById({ db, id });
-  if (!attachment) throw new AppError("not_found:attachment", "No attachment with that id.");
-  const { resource } = await findNotebook(db, attachment.notebookId);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "notebook:attach", resource, request });
+  const { db, actor, attachment } = await admitToAttachment({ attachmentId: id, action: "notebook:attach", request });
   if (await isAttachmentInEdition({ db, notebookId: attachment.notebookId, attachmentId: id })) {
     throw new AppError("conflict:attachment", "A published edition shows this attachment; editions are frozen, so it stays.");
   }

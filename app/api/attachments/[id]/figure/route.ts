@@ -3,12 +3,9 @@
 //   → 201 {"placed": "<attachment id>"}
 //   → 409 conflict:attachment for CSV data (only PNG, JPEG and PDF are figures)
 //   → 400 bad_request:*, 401 unauthorized:session, 403 forbidden:notebook, 404 not_found:attachment
-import { getDb } from "@/db/client";
-import { getAttachmentById } from "@/db/queries/attachments";
 import { editNotebookDocument } from "@/app/_server/collab/documents";
-import { findNotebook } from "@/app/_server/editions/notebook-lookup";
 import { AppError, handleRoute } from "@/app/_server/errors";
-import { auditChange, authorize, loadActor, requireUser } from "@/app/_server/guard";
+import { admitToAttachment, auditChange } from "@/app/_server/guard";
 import { parseJsonBody, parseParams } from "@/app/_server/parse";
 import { appendFigure } from "@/app/_server/storage/place-figure";
 import { FIGURE_TYPES, type AttachmentType } from "@/app/_server/storage/sniff";
@@ -21,13 +18,7 @@ type Params = { id: string };
 export const POST = handleRoute<Params>(async (request, { params }) => {
   const { id } = await parseParams(params, attachmentParams);
   const body = await parseJsonBody(request, placeFigureBody);
-  const user = await requireUser();
-  const db = await getDb();
-  const attachment = await getAttachmentById({ db, id });
-  if (!attachment) throw new AppError("not_found:attachment", "No attachment with that id.");
-  const { resource } = await findNotebook(db, attachment.notebookId);
-  const actor = await loadActor({ db, user });
-  await authorize({ db, actor, action: "notebook:edit", resource, request });
+  const { db, user, actor, attachment } = await admitToAttachment({ attachmentId: id, action: "notebook:edit", request });
   if (!FIGURE_TYPES.includes(attachment.contentType as AttachmentType)) {
     throw new AppError("conflict:attachment", "Only PNG, JPEG and PDF attachments can be figures; CSV data stays an attachment.");
   }
