@@ -3,7 +3,7 @@
 import { useEffect, useState, type RefObject } from "react";
 
 /** How far outside the visible area a block counts as near: about a screen above and below. */
-export const NEAR_MARGIN = "900px 0px";
+const NEAR_MARGIN = "900px 0px";
 
 type Listener = (near: boolean) => void;
 const observers = new Map<string, IntersectionObserver>();
