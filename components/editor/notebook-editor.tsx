@@ -3,6 +3,7 @@
 import "katex/dist/katex.min.css";
 import "./notebook-editor.css";
 
+import type { NodeViewRenderer } from "@tiptap/core";
 import { EditorContent, ReactNodeViewRenderer, useEditor, useEditorState } from "@tiptap/react";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { notebookExtensions } from "@/editor/notebook-extensions";
@@ -20,6 +21,7 @@ import { FigureView } from "./figure-view";
 import { SpacetimeBlockView } from "./spacetime-block-view";
 import { createNotebookChecker, type NotebookChecker } from "./step-checker-client";
 import { StepView } from "./step-view";
+import { startedInStepChrome } from "./shadow-chrome";
 import { updateStepView } from "./step-view-update";
 import { useCollaboration, type Collaboration } from "./use-collaboration";
 import { colorForUser } from "@/editor/collaboration";
@@ -29,18 +31,25 @@ import { useStepChecks } from "./use-step-checks";
 import { VerdictSummary } from "./verdict-summary";
 import { RemarksPanel, RemarksProvider } from "@/components/remarks/remarks-panel";
 
+/**
+ * The step's node view. Its default re-renders only when the node changes; numbers and
+ * verdicts arrive as decorations, so every update goes through ours (see updateStepView).
+ * Events from the step's controls reach ProseMirror retargeted to their shadow host, where the
+ * default cannot tell a select from a margin; those are the controls' own.
+ */
+const renderStep = ReactNodeViewRenderer(StepView, { update: updateStepView });
+const stepNodeView: NodeViewRenderer = (props) => {
+  const view = renderStep(props);
+  const ownStopEvent = view.stopEvent?.bind(view);
+  view.stopEvent = (event: Event) => startedInStepChrome(event) || (ownStopEvent?.(event) ?? false);
+  return view;
+};
+
 function withViews(session: Collaboration, me: { name: string; color: string }) {
   return notebookExtensions({
     collaboration: { document: session.doc },
     presence: { provider: session.provider, user: { ...me, status: "active" } },
-    step: Step.extend({
-      addNodeView: () =>
-        ReactNodeViewRenderer(StepView, {
-          // The default re-renders only when the node changes; numbers and verdicts arrive as
-          // decorations, so every update goes through ours (see updateStepView).
-          update: updateStepView,
-        }),
-    }),
+    step: Step.extend({ addNodeView: () => stepNodeView }),
     spacetimeBlock: SpacetimeBlock.extend({ addNodeView: () => ReactNodeViewRenderer(SpacetimeBlockView) }),
     figure: Figure.extend({ addNodeView: () => ReactNodeViewRenderer(FigureView) }),
   });

@@ -10,6 +10,7 @@ import { VerdictMark } from "./verdict-mark";
 import { StepRemarkButton } from "@/components/remarks/remark-actions";
 import { LimitProbe } from "./limit-probe";
 import { KatexShadow } from "./katex-shadow";
+import { ShadowChrome } from "./shadow-chrome";
 import { useNearViewport } from "./use-near-viewport";
 
 const KIND_LABEL: Record<JustificationKind, string> = {
@@ -104,7 +105,7 @@ export function StepView({ node, decorations, editor, updateAttributes }: ReactN
         </div>
         <NodeViewContent<"pre"> as="pre" className="math-source" spellCheck={false} aria-label={`LaTeX source of step ${numbering.stepNumber ?? ""}`} />
 
-        <div contentEditable={false} className="mt-1 font-sans text-xs text-ink-soft">
+        <ShadowChrome className="mt-1 font-sans text-xs text-ink-soft">
           {editable && near ? (
             <div className="flex flex-wrap items-center gap-x-2 gap-y-1">
               <label className="flex items-center gap-1">
@@ -179,14 +180,14 @@ export function StepView({ node, decorations, editor, updateAttributes }: ReactN
               {justificationTail}
             </p>
           )}
-        </div>
+        </ShadowChrome>
       </div>
 
-      <aside contentEditable={false} className="col-start-2 mt-1 border-l border-dashed border-paper-edge pl-3 md:col-start-3 md:mt-0 md:pt-2" aria-label={`Verdict of step ${numbering.stepNumber ?? ""}`}>
+      <ShadowChrome as="aside" className="col-start-2 mt-1 border-l border-dashed border-paper-edge pl-3 md:col-start-3 md:mt-0 md:pt-2" label={`Verdict of step ${numbering.stepNumber ?? ""}`}>
         <VerdictMark verdict={verdict} stepNumber={numbering.stepNumber} />
         <StepRemarkButton stepId={id} stepNumber={numbering.stepNumber} />
         <LimitProbe editor={editor} stepId={id} stepNumber={numbering.stepNumber} kind={kind} detail={node.attrs.detail} />
-      </aside>
+      </ShadowChrome>
     </NodeViewWrapper>
   );
 }

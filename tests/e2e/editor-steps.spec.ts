@@ -69,4 +69,13 @@ test("an author writes a block and three steps and sees verified, verified, refu
   await readerSteps.expectVerdict(2, "verified");
   await readerSteps.expectVerdict(3, "refuted");
   await expect(readerPage.getByRole("toolbar", { name: "Insert" })).toHaveCount(0);
+
+  // keys typed into a step's controls stay there: the citation field takes them, the relation does not
+  const cites = page.getByLabel("Steps cited by step 3 (numbers)", { exact: true });
+  await cites.click();
+  await page.keyboard.type("2");
+  await expect(cites).toHaveValue("2");
+  await page.keyboard.press("Enter");
+  await expect(steps.source(3)).toHaveText(WRONG);
+  await expect(cites).toHaveValue("2");
 });
