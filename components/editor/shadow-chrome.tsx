@@ -1,6 +1,6 @@
 "use client";
 
-import { createElement, useLayoutEffect, useRef, useState, type ReactNode } from "react";
+import { useLayoutEffect, useRef, useState, type ReactNode } from "react";
 import { createPortal } from "react-dom";
 import { canAdoptSheets, copiedPageSheet } from "./shadow-sheets";
 
@@ -33,7 +33,8 @@ export function ShadowChrome({ as: Tag = "div", className, label, children }: { 
     setRoot(shadow);
   }, []);
   const content = root === "in place" ? children : root ? createPortal(children, root) : null;
-  return createElement(Tag, { ref: host, contentEditable: false, className, "aria-label": label, [CHROME_HOST_ATTRIBUTE]: "" }, content);
+  const hostProps = { contentEditable: false, className, "aria-label": label, [CHROME_HOST_ATTRIBUTE]: "" };
+  return Tag === "aside" ? <aside ref={host} {...hostProps}>{content}</aside> : <div ref={host as React.RefObject<HTMLDivElement>} {...hostProps}>{content}</div>;
 }
 
 /** True for an event that started inside a step's controls (events leave a shadow root retargeted to its host). */
