@@ -1,12 +1,13 @@
 "use client";
 
 import type { Editor } from "@tiptap/core";
+import { memo } from "react";
 import { MATH_SHORTCUTS } from "@/editor/math-shortcuts";
 
 const shortcutKeys = (keys: string) => keys.replace("Mod", typeof navigator !== "undefined" && /Mac/.test(navigator.platform) ? "⌘" : "Ctrl");
 
-/** Insert buttons for the blocks of a notebook, and the math shortcuts in words. */
-export function EditorToolbar({ editor }: { editor: Editor }) {
+/** Insert buttons for the blocks of a notebook, and the math shortcuts in words (memoised: they change with nothing on the page). */
+export const EditorToolbar = memo(function EditorToolbar({ editor }: { editor: Editor }) {
   const button = "rounded border border-paper-edge bg-paper px-2 py-1 hover:bg-paper-deep";
   return (
     <div className="flex flex-wrap items-center gap-1.5 font-sans text-xs" role="toolbar" aria-label="Insert">
@@ -67,4 +68,4 @@ export function EditorToolbar({ editor }: { editor: Editor }) {
       </details>
     </div>
   );
-}
+});

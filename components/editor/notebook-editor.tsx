@@ -4,14 +4,12 @@ import "katex/dist/katex.min.css";
 import "./notebook-editor.css";
 
 import type { NodeViewRenderer } from "@tiptap/core";
-import { EditorContent, ReactNodeViewRenderer, useEditor, useEditorState } from "@tiptap/react";
-import { useEffect, useMemo, useRef, useState } from "react";
+import { EditorContent, ReactNodeViewRenderer, useEditor } from "@tiptap/react";
+import { useEffect, useMemo, useState } from "react";
 import { notebookExtensions } from "@/editor/notebook-extensions";
 import { Figure } from "@/editor/figure";
 import { SpacetimeBlock } from "@/editor/spacetime-block";
 import { Step } from "@/editor/step";
-import { stepNumberingKey } from "@/editor/step-numbering";
-import { stepVerdictsKey, tallyVerdicts, type VerdictTally } from "@/editor/step-verdicts";
 import { EditorToolbar } from "./editor-toolbar";
 import { NotebookOutline, jumpTo } from "./notebook-outline";
 import type { NotebookEditorLoaderProps } from "./notebook-editor-loader";
@@ -28,6 +26,7 @@ import { colorForUser } from "@/editor/collaboration";
 import { useMediaQuery } from "@/components/ui/use-media-query";
 import { useOutline } from "./use-outline";
 import { useStepChecks } from "./use-step-checks";
+import { useVerdictSummary } from "./use-verdict-summary";
 import { VerdictSummary } from "./verdict-summary";
 import { RemarksPanel, RemarksProvider } from "@/components/remarks/remarks-panel";
 
@@ -111,32 +110,11 @@ function SharedNotebookEditor({
   }, [editor, locked]);
   useStepChecks(editor, checker);
 
-  // The selector runs on every transaction; typing keeps both plugin states, so count only when one changes.
-  const summaryCache = useRef<{ verdicts: unknown; numbers: unknown; summary: { tally: VerdictTally; probabilistic: number } } | null>(null);
-  const view = useEditorState({
-    editor,
-    // Tiptap's state snapshot keeps the editor it had at the last transaction, so a document
-    // that never changes after the editor is made (a new, empty notebook) would stay on null.
-    selector: ({ editor: snapshot }) => {
-      const current = snapshot ?? editor;
-      if (!current) return null;
-      const verdicts = stepVerdictsKey.getState(current.state)?.verdicts;
-      const numbers = stepNumberingKey.getState(current.state)?.numbers;
-      const cached = summaryCache.current;
-      if (cached && verdicts && numbers && cached.verdicts === verdicts && cached.numbers === numbers) return cached.summary;
-      let probabilistic = 0;
-      for (const verdict of verdicts?.values() ?? []) {
-        if (verdict.state === "answered" && verdict.answer.verdict === "verified" && verdict.answer.method.kind === "numeric") probabilistic += 1;
-      }
-      const summary = { tally: tallyVerdicts(current.state), probabilistic };
-      summaryCache.current = { verdicts, numbers, summary };
-      return summary;
-    },
-  });
+  const summary = useVerdictSummary(editor);
   const outline = useOutline(editor);
   const wide = useMediaQuery("(min-width: 1024px)"); // Tailwind's lg
 
-  if (!editor || !view || !session.loaded) {
+  if (!editor || !summary || !session.loaded) {
     return <p role="status" className="py-12 text-sm text-ink-muted">Opening the notebook…</p>;
   }
 
@@ -167,8 +145,8 @@ function SharedNotebookEditor({
           <div className="sticky top-0 z-10 -mx-2 mb-4 space-y-2 border-b border-paper-edge bg-paper/95 px-2 py-2 backdrop-blur">
             <div className="flex flex-wrap items-center justify-between gap-2">
               <VerdictSummary
-                tally={view.tally}
-                probabilistic={view.probabilistic}
+                tally={summary.tally}
+                probabilistic={summary.probabilistic}
                 onJumpToRefuted={firstRefuted ? () => jumpTo(editor, firstRefuted.pos) : null}
               />
               <div className="flex flex-col items-end gap-1">

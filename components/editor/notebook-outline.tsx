@@ -1,6 +1,6 @@
 "use client";
 
-import { useRef } from "react";
+import { memo, useRef } from "react";
 import type { Editor } from "@tiptap/core";
 import { renderLatex } from "@/editor/katex-render";
 import type { OutlineEntry } from "@/editor/outline";
@@ -59,8 +59,11 @@ export function jumpTo(editor: Editor, pos: number): void {
   if (dom instanceof HTMLElement) dom.scrollIntoView({ block: "center" });
 }
 
-/** Sections, spacetime blocks and steps of the notebook, each a link that jumps there. */
-export function NotebookOutline({ editor, entries }: { editor: Editor; entries: readonly OutlineEntry[] }) {
+/**
+ * Sections, spacetime blocks and steps of the notebook, each a link that jumps there. Memoised:
+ * it changes with the outline entries, not with the page's link state or summary line.
+ */
+export const NotebookOutline = memo(function NotebookOutline({ editor, entries }: { editor: Editor; entries: readonly OutlineEntry[] }) {
   if (!entries.length) return <p className="font-sans text-sm text-ink-muted">Headings and steps will be listed here.</p>;
   const keys = outlineKeys(entries);
   return (
@@ -91,4 +94,4 @@ export function NotebookOutline({ editor, entries }: { editor: Editor; entries: 
       ))}
     </ol>
   );
-}
+});
