@@ -18,7 +18,7 @@ const pageSheet = () => copiedPageSheet("page", () => true);
  * them through the portal. Where shadow roots cannot adopt sheets, the children render in place.
  */
 export function ShadowChrome({ as: Tag = "div", className, label, children }: { as?: "div" | "aside"; className?: string; label?: string; children: ReactNode }) {
-  const host = useRef<HTMLElement>(null);
+  const host = useRef<HTMLDivElement>(null);
   const [root, setRoot] = useState<ShadowRoot | "in place" | null>(null);
   useLayoutEffect(() => {
     const element = host.current;
@@ -34,7 +34,7 @@ export function ShadowChrome({ as: Tag = "div", className, label, children }: { 
   }, []);
   const content = root === "in place" ? children : root ? createPortal(children, root) : null;
   const hostProps = { contentEditable: false, className, "aria-label": label, [CHROME_HOST_ATTRIBUTE]: "" };
-  return Tag === "aside" ? <aside ref={host} {...hostProps}>{content}</aside> : <div ref={host as React.RefObject<HTMLDivElement>} {...hostProps}>{content}</div>;
+  return Tag === "aside" ? <aside ref={host} {...hostProps}>{content}</aside> : <div ref={host} {...hostProps}>{content}</div>;
 }
 
 /** True for an event that started inside a step's controls (events leave a shadow root retargeted to its host). */
@@ -44,5 +44,6 @@ export function startedInStepChrome(event: Event): boolean {
   const root = origin.getRootNode();
   if (root instanceof ShadowRoot) return root.host.hasAttribute(CHROME_HOST_ATTRIBUTE);
   // rendered in place (no shadow roots): the host is an ancestor
-  return origin instanceof Element ? origin.closest(`[${CHROME_HOST_ATTRIBUTE}]`) !== null : origin.parentElement?.closest(`[${CHROME_HOST_ATTRIBUTE}]`) != null;
+  const element = origin instanceof Element ? origin : origin.parentElement;
+  return element?.closest(`[${CHROME_HOST_ATTRIBUTE}]`) != null;
 }
