@@ -46,13 +46,37 @@ function stepNodes(doc: PMNode): Map<string, { node: PMNode; pos: number }> {
   return steps;
 }
 
+type VerdictSpec = { readonly verdict: StepVerdict | null; readonly stepId: string };
+
+function verdictDecoration(from: number, to: number, stepId: string, verdict: StepVerdict | undefined): Decoration {
+  return Decoration.node(from, to, { "data-verdict": verdictWord(verdict) }, { verdict: verdict ?? null, stepId } satisfies VerdictSpec);
+}
+
 function buildDecorations(doc: PMNode, verdicts: ReadonlyMap<string, StepVerdict>): DecorationSet {
   const decorations: Decoration[] = [];
-  for (const [id, { node, pos }] of stepNodes(doc)) {
-    const verdict = verdicts.get(id);
-    decorations.push(Decoration.node(pos, pos + node.nodeSize, { "data-verdict": verdictWord(verdict) }, { verdict: verdict ?? null }));
-  }
+  for (const [id, { node, pos }] of stepNodes(doc)) decorations.push(verdictDecoration(pos, pos + node.nodeSize, id, verdicts.get(id)));
   return DecorationSet.create(doc, decorations);
+}
+
+/** Above this many changed steps one rebuild is cheaper than replacing marks one by one. */
+const MOST_MARKS_REPLACED = 32;
+
+/**
+ * Replaces the marks of the steps in `ids` and keeps every other step's mark (and so its DOM
+ * attributes) as it is. In a long notebook a rebuild walks every step and makes ProseMirror
+ * compare every mark again, which the first keystroke in a step paid for. Falls back to a
+ * rebuild when a step has no mark to replace (new, or a duplicated id) or when many changed.
+ */
+function replaceDecorations(set: DecorationSet, doc: PMNode, ids: ReadonlySet<string>, verdicts: ReadonlyMap<string, StepVerdict>): DecorationSet {
+  if (ids.size === 0) return set;
+  if (ids.size > MOST_MARKS_REPLACED) return buildDecorations(doc, verdicts);
+  const stale = set.find(undefined, undefined, (spec) => ids.has((spec as Partial<VerdictSpec>).stepId ?? ""));
+  if (stale.length !== ids.size) return buildDecorations(doc, verdicts);
+  const fresh = stale.map((mark) => {
+    const { stepId } = mark.spec as VerdictSpec;
+    return verdictDecoration(mark.from, mark.to, stepId, verdicts.get(stepId));
+  });
+  return set.remove(stale).add(doc, fresh);
 }
 
 /** An edited step's old answer stays visible (dimmed) as `previous` until the new one arrives. */
@@ -79,11 +103,13 @@ function markEditedPending(tr: Transaction, oldDoc: PMNode, verdicts: Map<string
 function applyTyping(tr: Transaction, old: StepVerdictsState, edited: readonly string[], meta: VerdictMeta | undefined): StepVerdictsState {
   // Already pending steps stay as they are: then nothing changes, and nothing is copied.
   const unchanged = !meta && edited.every((id) => old.verdicts.get(id)?.state === "pending");
-  if (unchanged) return { verdicts: old.verdicts, decorations: old.decorations.map(tr.mapping, tr.doc) };
+  const mapped = old.decorations.map(tr.mapping, tr.doc);
+  if (unchanged) return { verdicts: old.verdicts, decorations: mapped };
   const verdicts = new Map(old.verdicts);
   for (const id of edited) markPending(id, verdicts);
   for (const [id, verdict] of meta?.set ?? []) verdicts.set(id, verdict);
-  return { verdicts, decorations: buildDecorations(tr.doc, verdicts) };
+  const changed = new Set([...edited, ...(meta?.set ?? []).map(([id]) => id)]);
+  return { verdicts, decorations: replaceDecorations(mapped, tr.doc, changed, verdicts) };
 }
 
 /**
@@ -129,6 +155,8 @@ export const StepVerdicts = Extension.create({
             const verdicts = new Map(old.verdicts);
             if (tr.docChanged) markEditedPending(tr, oldState.doc, verdicts);
             for (const [id, verdict] of meta?.set ?? []) verdicts.set(id, verdict);
+            // checker answers alone (the common case once a notebook is open) replace only their steps' marks
+            if (!tr.docChanged && meta) return { verdicts, decorations: replaceDecorations(old.decorations, tr.doc, new Set(meta.set.map(([id]) => id)), verdicts) };
             return { verdicts, decorations: buildDecorations(tr.doc, verdicts) };
           },
         },

@@ -42,4 +42,22 @@ describe("step verdicts", () => {
     editor.commands.setStepVerdicts([["st-a", { state: "answered", answer: refuted }]]);
     expect(JSON.stringify(editor.getJSON())).toBe(before);
   });
+
+  it("replaces only the changed steps' marks, and they say what a full rebuild would say", () => {
+    const editor = headlessEditor(doc(step("st-a", "a=b"), step("st-b", "b=c"), step("st-c", "c=d")));
+    editor.commands.setStepVerdicts([["st-a", { state: "answered", answer: verified }], ["st-b", { state: "answered", answer: verified }], ["st-c", { state: "answered", answer: refuted }]]);
+    const marks = () => stepVerdictsKey.getState(editor.state)!.decorations.find();
+    const untouched = marks().find((mark) => (mark.spec as { stepId: string }).stepId === "st-c");
+    editor.view.dispatch(editor.state.tr.insertText("x", 2)); // the first keystroke in st-a
+    editor.commands.setStepVerdicts([["st-b", { state: "answered", answer: refuted }]]); // an answer for st-b
+    const now = marks().sort((x, y) => x.from - y.from);
+    expect(now.map((mark) => [mark.from, mark.to, (mark as unknown as { type: { attrs: Record<string, string> } }).type.attrs["data-verdict"]])).toEqual(
+      [0, 1, 2].map((index) => {
+        let from = 0;
+        for (let i = 0; i < index; i++) from += editor.state.doc.child(i).nodeSize;
+        return [from, from + editor.state.doc.child(index).nodeSize, ["pending", "refuted", "refuted"][index]];
+      }),
+    );
+    expect(now[2].spec).toBe(untouched!.spec); // st-c's mark was mapped, not rebuilt
+  });
 });
