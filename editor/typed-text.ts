@@ -1,11 +1,17 @@
 import { Extension } from "@tiptap/core";
 import { Plugin, PluginKey } from "@tiptap/pm/state";
 import type { EditorView } from "@tiptap/pm/view";
+import { caretInPlainText, unwriteTypedText, writeTypedTextInPlace } from "./typed-text-in-place";
 
 export const typedTextKey = new PluginKey("typedText");
 
 /** The part of a ProseMirror view that typing needs. */
 export type TypingView = Pick<EditorView, "state" | "dispatch" | "editable" | "composing" | "someProp">;
+
+/** A view in a browser, where a keystroke can be written in place. */
+type ViewWithDom = TypingView & Pick<EditorView, "dom" | "posAtDOM" | "coordsAtPos" | "hasFocus" | "isDestroyed">;
+
+const hasDom = (view: TypingView): view is ViewWithDom => typeof (view as Partial<ViewWithDom>).posAtDOM === "function" && Boolean((view as Partial<ViewWithDom>).dom?.ownerDocument);
 
 /** A printable character typed on its own: no shortcut modifier, not part of an IME composition. */
 export function plainTypedCharacter(view: Pick<EditorView, "composing">, event: KeyboardEvent): string | null {
@@ -29,8 +35,44 @@ export function typeCharacter(view: TypingView, event: KeyboardEvent): boolean {
   const { from, to } = view.state.selection;
   const insert = () => view.state.tr.insertText(text).scrollIntoView();
   const handled = view.someProp("handleTextInput", (handle) => handle(view as EditorView, from, to, text, insert));
-  if (!handled) view.dispatch(insert());
+  if (handled) return true;
+  if (!typeInPlace(view, text)) view.dispatch(insert());
   return true;
+}
+
+/**
+ * The common keystroke, a character typed into plain text, without a synchronous layout: the
+ * DOM is written first (`writeTypedTextInPlace`), so ProseMirror's update finds nothing to
+ * write and no caret to place, and the check that the caret is still on screen waits for
+ * the frame, which lays the page out anyway. False when this keystroke cannot go that way.
+ */
+function typeInPlace(view: TypingView, text: string): boolean {
+  if (!hasDom(view)) return false;
+  const caret = caretInPlainText(view, view.state);
+  if (!caret || !writeTypedTextInPlace(view, caret, text)) return false;
+  try {
+    view.dispatch(view.state.tr.insertText(text));
+  } catch (error) {
+    unwriteTypedText(view, caret, text);
+    throw error;
+  }
+  keepCaretInViewAtNextFrame(view);
+  return true;
+}
+
+const caretChecksPending = new WeakSet<object>();
+
+/** Scrolls the caret into view, as `scrollIntoView()` on the transaction would, if the frame finds it off screen. */
+function keepCaretInViewAtNextFrame(view: ViewWithDom): void {
+  if (caretChecksPending.has(view) || typeof requestAnimationFrame !== "function") return;
+  caretChecksPending.add(view);
+  requestAnimationFrame(() => {
+    caretChecksPending.delete(view);
+    if (view.isDestroyed || !view.hasFocus()) return;
+    const caret = view.coordsAtPos(view.state.selection.head);
+    const visible = caret.top >= 0 && caret.bottom <= window.innerHeight && caret.left >= 0 && caret.right <= window.innerWidth;
+    if (!visible) view.dispatch(view.state.tr.scrollIntoView());
+  });
 }
 
 /**

@@ -78,4 +78,23 @@ test("an author writes a block and three steps and sees verified, verified, refu
   await page.keyboard.press("Enter");
   await expect(steps.source(3)).toHaveText(WRONG);
   await expect(cites).toHaveValue("2");
+
+  // characters typed in the middle of a relation land at the caret, one after the other, and
+  // plain typing never has the page's selection set for it (that would lay the page out per key)
+  await steps.caretAfterStep(3);
+  for (let i = 0; i < 4; i += 1) await page.keyboard.press("ArrowLeft");
+  await page.evaluate(() => {
+    const counted = window as unknown as { caretWrites: number };
+    counted.caretWrites = 0;
+    for (const name of ["collapse", "setBaseAndExtent", "addRange", "extend"] as const) {
+      const original = Selection.prototype[name] as (...args: unknown[]) => void;
+      Selection.prototype[name] = function (this: Selection, ...args: unknown[]) {
+        counted.caretWrites += 1;
+        return original.apply(this, args);
+      } as never;
+    }
+  });
+  await page.keyboard.type("+0x");
+  await expect(steps.source(3)).toHaveText(`${WRONG.slice(0, -4)}+0x${WRONG.slice(-4)}`);
+  expect(await page.evaluate(() => (window as unknown as { caretWrites: number }).caretWrites)).toBe(0);
 });
