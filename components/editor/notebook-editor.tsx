@@ -151,7 +151,7 @@ function SharedNotebookEditor({
               />
               <div className="flex flex-col items-end gap-1">
                 {locked ? <p className="font-sans text-xs text-ink-muted">Read-only: you can read and follow the verdicts.</p> : null}
-                <LinkIndicator link={session.link} readOnly={locked} />
+                <LinkIndicator link={session.link} stored={session.stored} readOnly={locked} />
               </div>
             </div>
             <CoAuthorList coAuthors={session.coAuthors} />

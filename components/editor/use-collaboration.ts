@@ -1,6 +1,7 @@
 "use client";
 
 import { useEffect, useState } from "react";
+import { ObservableV2 } from "lib0/observable";
 import * as Y from "yjs";
 import { WebsocketProvider } from "y-websocket";
 import { IndexeddbPersistence } from "y-indexeddb";
@@ -11,11 +12,27 @@ import { sendEditsAfterFrame } from "./send-after-frame";
 import type { CoAuthor } from "@/editor/collaboration";
 
 /** What the page says about the link to the server, in plain words. */
-export type LinkState =
-  | { kind: "connecting" }
-  | { kind: "online"; allStored: boolean }
-  | { kind: "offline"; allStored: boolean }
-  | { kind: "refused"; message: string };
+export type LinkState = { kind: "connecting" } | { kind: "online" } | { kind: "offline" } | { kind: "refused"; message: string };
+
+/**
+ * Whether everything typed here is stored. It flips with every burst of typing, so it is not
+ * React state: a React commit with the caret in a long notebook costs more than a keystroke
+ * (React measures the selection across the whole editable text around each commit), and the
+ * line that shows it (`LinkIndicator`) writes its words itself.
+ */
+export class StoredFlag extends ObservableV2<{ change: (allStored: boolean) => void }> {
+  private value = true;
+
+  get allStored(): boolean {
+    return this.value;
+  }
+
+  set(allStored: boolean): void {
+    if (allStored === this.value) return;
+    this.value = allStored;
+    this.emit("change", [allStored]);
+  }
+}
 
 export interface Collaboration {
   readonly doc: Y.Doc;
@@ -23,6 +40,7 @@ export interface Collaboration {
   /** True once the server's copy (or, offline, this browser's copy) has been loaded. */
   readonly loaded: boolean;
   readonly link: LinkState;
+  readonly stored: StoredFlag;
   readonly coAuthors: readonly (CoAuthor & { clientId: number })[];
 }
 
@@ -46,25 +64,25 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
     const provider = new WebsocketProvider(`${scheme}://${window.location.host}/yjs`, notebookId, doc, { maxBackoffTime: 5_000 });
     const stopDeferringSends = sendEditsAfterFrame(provider, doc);
     const tracker = new StoredStateTracker(doc);
+    const stored = new StoredFlag();
     let loaded = false;
     let refused: string | null = null;
     let lastInput = Date.now();
     let lastSignature = "";
 
     // While the author types, the server acknowledges each keystroke within milliseconds, so the
-    // stored state would flip on every key and re-render the page each time (and every React
-    // commit with the caret in a long notebook costs more than the keystroke). Say "storing"
-    // until local edits pause, then look again.
+    // stored state would flicker between its two phrases on every key. Say "storing" until
+    // local edits pause, then look again.
     const editsSettle = new QuietTimer(STORED_AFTER_QUIET_MS, () => publish());
 
     const publish = () => {
-      const allStored = tracker.unstoredCount() === 0 && !editsSettle.waiting;
+      stored.set(tracker.unstoredCount() === 0 && !editsSettle.waiting);
       const link: LinkState = refused
         ? { kind: "refused", message: refused }
         : provider.wsconnected && provider.synced
-          ? { kind: "online", allStored }
+          ? { kind: "online" }
           : loaded
-            ? { kind: "offline", allStored }
+            ? { kind: "offline" }
             : { kind: "connecting" };
       const coAuthors = [...provider.awareness.getStates().entries()]
         .filter(([clientId, state]) => clientId !== doc.clientID && state.user)
@@ -73,11 +91,10 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
       const signature = JSON.stringify([loaded, link, coAuthors]);
       if (signature === lastSignature) return;
       lastSignature = signature;
-      setSession({ doc, provider, loaded, link, coAuthors });
+      setSession({ doc, provider, loaded, link, stored, coAuthors });
     };
-    // Document updates and the server's acknowledgements only move the unstored count: publish
-    // them at most every 200 ms. Re-rendering the editor per keystroke made React walk the whole
-    // editable DOM each time (it saves and restores the selection around every commit).
+    // Document updates and the server's acknowledgements only move the unstored count: look at
+    // them at most every 200 ms (publish also compares presence, which is not free per keystroke).
     let updateTimer: ReturnType<typeof setTimeout> | null = null;
     const publishSoon = () => {
       updateTimer ??= setTimeout(() => {
@@ -150,6 +167,7 @@ export function useCollaboration(notebookId: string, me: CoAuthor): Collaboratio
       provider.destroy();
       stopBatchingLocalCopy();
       void local.destroy();
+      stored.destroy();
       doc.destroy();
       setSession(null);
     };
