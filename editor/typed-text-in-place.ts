@@ -72,8 +72,14 @@ export function writeTypedTextInPlace(view: object, caret: CaretInText, text: st
   return true;
 }
 
-/** Undoes {@link writeTypedTextInPlace} when the transaction that should follow it failed. */
-export function unwriteTypedText(view: object, caret: CaretInText, text: string): void {
-  const observer = (view as WithDomObserver).domObserver;
-  observer?.stopped?.(() => caret.node.deleteData(caret.offset, text.length));
+/**
+ * Takes back {@link writeTypedTextInPlace} when the document did not take the text (a plugin
+ * filtered the transaction out or undid it, or dispatching threw): ProseMirror compares a DOM
+ * text node with the document only when that node's text changed, so it would not notice.
+ * The caret moves back with the deletion, again by the live-range rules.
+ */
+export function takeBackTypedText(view: object, caret: CaretInText, text: string): void {
+  const { node, offset } = caret;
+  if (node.data.slice(offset, offset + text.length) !== text) return;
+  (view as WithDomObserver).domObserver?.stopped?.(() => node.deleteData(offset, text.length));
 }

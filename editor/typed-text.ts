@@ -1,7 +1,7 @@
 import { Extension } from "@tiptap/core";
 import { Plugin, PluginKey } from "@tiptap/pm/state";
 import type { EditorView } from "@tiptap/pm/view";
-import { caretInPlainText, unwriteTypedText, writeTypedTextInPlace } from "./typed-text-in-place";
+import { caretInPlainText, takeBackTypedText, writeTypedTextInPlace } from "./typed-text-in-place";
 
 export const typedTextKey = new PluginKey("typedText");
 
@@ -50,11 +50,11 @@ function typeInPlace(view: TypingView, text: string): boolean {
   if (!hasDom(view)) return false;
   const caret = caretInPlainText(view, view.state);
   if (!caret || !writeTypedTextInPlace(view, caret, text)) return false;
+  const before = view.state.doc;
   try {
     view.dispatch(view.state.tr.insertText(text));
-  } catch (error) {
-    unwriteTypedText(view, caret, text);
-    throw error;
+  } finally {
+    if (view.state.doc.eq(before)) takeBackTypedText(view, caret, text);
   }
   keepCaretInViewAtNextFrame(view);
   return true;

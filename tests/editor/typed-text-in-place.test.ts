@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { TextSelection } from "@tiptap/pm/state";
 import type { Editor } from "@tiptap/core";
-import { caretInPlainText, unwriteTypedText, writeTypedTextInPlace, type CaretInText, type InPlaceView } from "@/editor/typed-text-in-place";
+import { caretInPlainText, takeBackTypedText, writeTypedTextInPlace, type CaretInText, type InPlaceView } from "@/editor/typed-text-in-place";
 import { doc, headlessEditor, paragraph, step } from "./support/headless";
 
 const TEXT_NODE = 3;
@@ -33,9 +33,10 @@ class FakeText {
 /** A view whose DOM selection is a collapsed caret in `node`, mapped to document position `pos`. */
 function viewOver(node: FakeText, pos: number, { anchorOffset = node.caret } = {}): InPlaceView & { paused: number; domObserver: { stopped(f: () => void): void } } {
   const selection = { focusNode: node, focusOffset: node.caret, anchorNode: node, anchorOffset };
+  const start = pos - node.caret; // where the text node starts in the document
   const view = {
     dom: { ownerDocument: { getSelection: () => selection } },
-    posAtDOM: (target: unknown, offset: number) => (target === node ? pos - node.caret + offset : -1),
+    posAtDOM: (target: unknown, offset: number) => (target === node ? start + offset : -1),
     paused: 0,
     domObserver: {
       stopped(f: () => void) {
@@ -71,7 +72,7 @@ describe("a typed character written straight into the DOM", () => {
     expect(caretInPlainText(viewOver(new FakeText("radius", 3), 8), caretAt(bold, 8))).toBeNull();
   });
 
-  it("inserts the text with the caret after it, with ProseMirror's observer paused, and can take it back", () => {
+  it("inserts the text with the caret after it, with ProseMirror's observer paused", () => {
     const node = new FakeText("ab", 2);
     const view = viewOver(node, 3);
     const caret: CaretInText = { node: node as unknown as Text, offset: 2 };
@@ -81,8 +82,16 @@ describe("a typed character written straight into the DOM", () => {
     const middle = new FakeText("r^3}", 2);
     writeTypedTextInPlace(viewOver(middle, 3), { node: middle as unknown as Text, offset: 2 }, "+0");
     expect([middle.data, middle.caret]).toEqual(["r^+03}", 4]);
+  });
 
-    unwriteTypedText(view, caret, "c");
+  it("takes the text back, caret and all, when the document did not take it", () => {
+    const node = new FakeText("ab", 2);
+    const view = viewOver(node, 3);
+    const caret: CaretInText = { node: node as unknown as Text, offset: 2 };
+    writeTypedTextInPlace(view, caret, "c");
+    takeBackTypedText(view, caret, "c");
+    expect([node.data, node.caret, view.paused]).toEqual(["ab", 2, 2]);
+    takeBackTypedText(view, caret, "c"); // nothing of it left to take back
     expect(node.data).toBe("ab");
   });
 
