@@ -17,6 +17,14 @@ export interface CaretInText {
  */
 type WithDomObserver = { domObserver?: { stopped?: (f: () => void) => void } };
 
+/** Runs `edit` with ProseMirror's DOM observer paused; false, without running it, when the observer is not reachable. */
+function withObserverPaused(view: object, edit: () => void): boolean {
+  const observer = (view as WithDomObserver).domObserver;
+  if (typeof observer?.stopped !== "function") return false;
+  observer.stopped(edit);
+  return true;
+}
+
 const TEXT_NODE = 3;
 
 /**
@@ -62,14 +70,11 @@ export function caretInPlainText(view: InPlaceView, state: EditorState): CaretIn
  * Returns false, touching nothing, when ProseMirror's observer is not reachable.
  */
 export function writeTypedTextInPlace(view: object, caret: CaretInText, text: string): boolean {
-  const observer = (view as WithDomObserver).domObserver;
-  if (typeof observer?.stopped !== "function") return false;
   const { node, offset } = caret;
-  observer.stopped(() => {
+  return withObserverPaused(view, () => {
     node.insertData(offset - 1, node.data[offset - 1] + text);
     node.deleteData(offset + text.length, 1);
   });
-  return true;
 }
 
 /**
@@ -80,6 +85,5 @@ export function writeTypedTextInPlace(view: object, caret: CaretInText, text: st
  */
 export function takeBackTypedText(view: object, caret: CaretInText, text: string): void {
   const { node, offset } = caret;
-  if (node.data.slice(offset, offset + text.length) !== text) return;
-  (view as WithDomObserver).domObserver?.stopped?.(() => node.deleteData(offset, text.length));
+  if (node.data.slice(offset, offset + text.length) === text) withObserverPaused(view, () => node.deleteData(offset, text.length));
 }
